@@ -1,0 +1,37 @@
+import { defineConfig } from "vitest/config";
+import path from "node:path";
+
+// Three suites: pure units, database-backed (real PostgreSQL, serial), and browser
+// (the built app in headless Chromium, serial). scripts/test.sh provides the services.
+const alias = { "@": path.resolve(__dirname) };
+
+export default defineConfig({
+  resolve: { alias },
+  test: {
+    projects: [
+      { resolve: { alias }, test: { name: "unit", include: ["tests/unit/**/*.test.ts"], environment: "node" } },
+      {
+        resolve: { alias },
+        test: {
+          name: "db",
+          include: ["tests/db/**/*.test.ts"],
+          environment: "node",
+          fileParallelism: false,
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+        },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: "browser",
+          include: ["tests/browser/**/*.test.ts"],
+          environment: "node",
+          fileParallelism: false,
+          testTimeout: 90_000,
+          hookTimeout: 120_000,
+        },
+      },
+    ],
+  },
+});
