@@ -1,0 +1,293 @@
+// The whole data model. Row types are exported beside each table.
+import {
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgEnum,
+  pgTable,
+  primaryKey,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from "drizzle-orm/pg-core";
+
+const createdAt = () => timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow();
+const updatedAt = () =>
+  timestamp("updated_at", { withTimezone: true, mode: "date" })
+    .notNull()
+    .defaultNow()
+    .$onUpdate(() => new Date());
+
+export const roleEnum = pgEnum("role", ["director", "designer", "staff"]);
+export const fieldRulesEnum = pgEnum("field_rules", ["high-school", "college"]);
+export const voiceEnum = pgEnum("voice", ["melody", "countermelody", "accompaniment", "bass", "percussion", "tacet"]);
+export const dynamicEnum = pgEnum("dynamic", ["pp", "p", "mp", "mf", "f", "ff", "fff"]);
+
+// Users and sessions: text ids because Lucia's Drizzle adapter expects them.
+export const users = pgTable("users", {
+  id: text("id").primaryKey(),
+  email: text("email").notNull().unique(),
+  name: text("name").notNull(),
+  passwordHash: text("password_hash").notNull(),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+});
+export type User = typeof users.$inferSelect;
+export type NewUser = typeof users.$inferInsert;
+
+// The session id is the SHA-256 of the cookie's token, so a leaked table grants nothing.
+export const sessions = pgTable(
+  "sessions",
+  {
+    id: text("id").primaryKey(),
+    userId: text("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    expiresAt: timestamp("expires_at", { withTimezone: true, mode: "date" }).notNull(),
+  },
+  (t) => [index("sessions_user_idx").on(t.userId)],
+);
+
+// One row per sign-in attempt, keyed by account and by address, so every app process counts the same.
+export const signInAttempts = pgTable(
+  "sign_in_attempts",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    key: text("key").notNull(),
+    attemptedAt: timestamp("attempted_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  },
+  (t) => [index("sign_in_attempts_key_time_idx").on(t.key, t.attemptedAt)],
+);
+
+export const programs = pgTable("programs", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  name: text("name").notNull(),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+});
+export type Program = typeof programs.$inferSelect;
+
+export const memberships = pgTable(
+  "memberships",
+  {
+    programId: uuid("program_id")
+      .notNull()
+      .references(() => programs.id, { onDelete: "cascade" }),
+    userId: text("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    role: roleEnum("role").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [primaryKey({ columns: [t.programId, t.userId] }), index("memberships_user_idx").on(t.userId)],
+);
+export type Membership = typeof memberships.$inferSelect;
+export type Role = (typeof roleEnum.enumValues)[number];
+
+// The program's instrument catalog, versioned: the newest row is in force, older ones can be restored.
+export const instrumentCatalogs = pgTable(
+  "instrument_catalogs",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    programId: uuid("program_id")
+      .notNull()
+      .references(() => programs.id, { onDelete: "cascade" }),
+    version: integer("version").notNull(),
+    instruments: jsonb("instruments").notNull(),
+    note: text("note").notNull().default(""),
+    createdBy: text("created_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("instrument_catalogs_program_version_idx").on(t.programId, t.version)],
+);
+
+export const shows = pgTable(
+  "shows",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    programId: uuid("program_id")
+      .notNull()
+      .references(() => programs.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    fieldRules: fieldRulesEnum("field_rules").notNull().default("high-school"),
+    temperatureC: doublePrecision("temperature_c").notNull().default(20),
+    relativeHumidityPct: doublePrecision("relative_humidity_pct").notNull().default(50),
+    pressureKPa: doublePrecision("pressure_kpa").notNull().default(101.325),
+    groundFactor: doublePrecision("ground_factor"),
+    /** The director's thresholds for the balance checks; null keeps the defaults. */
+    checkTargets: jsonb("check_targets"),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index("shows_program_idx").on(t.programId)],
+);
+export type Show = typeof shows.$inferSelect;
+
+export const listeningPoints = pgTable(
+  "listening_points",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    showId: uuid("show_id")
+      .notNull()
+      .references(() => shows.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    x: doublePrecision("x").notNull(),
+    y: doublePrecision("y").notNull(),
+    z: doublePrecision("z").notNull(),
+    order: integer("order").notNull().default(0),
+  },
+  (t) => [index("listening_points_show_idx").on(t.showId)],
+);
+export type ListeningPoint = typeof listeningPoints.$inferSelect;
+
+export const performers = pgTable(
+  "performers",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    showId: uuid("show_id")
+      .notNull()
+      .references(() => shows.id, { onDelete: "cascade" }),
+    label: text("label").notNull(),
+    instrument: text("instrument").notNull(),
+    section: text("section").notNull(),
+    part: text("part").notNull().default(""),
+    strengthDb: doublePrecision("strength_db").notNull().default(0),
+    name: text("name"),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("performers_show_label_idx").on(t.showId, t.label)],
+);
+export type Performer = typeof performers.$inferSelect;
+
+export const movements = pgTable(
+  "movements",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    showId: uuid("show_id")
+      .notNull()
+      .references(() => shows.id, { onDelete: "cascade" }),
+    number: integer("number").notNull(),
+    name: text("name").notNull(),
+  },
+  (t) => [uniqueIndex("movements_show_number_idx").on(t.showId, t.number)],
+);
+
+export const sets = pgTable(
+  "sets",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    showId: uuid("show_id")
+      .notNull()
+      .references(() => shows.id, { onDelete: "cascade" }),
+    movementId: uuid("movement_id").references(() => movements.id, { onDelete: "set null" }),
+    /** As the drill names it: "12" or "12A". */
+    number: text("number").notNull(),
+    /** Counts from the previous set to this one. */
+    counts: integer("counts").notNull(),
+    order: integer("order").notNull(),
+    /** Optimistic concurrency: every write of the set or its positions bumps it. */
+    version: integer("version").notNull().default(1),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [uniqueIndex("sets_show_number_idx").on(t.showId, t.number), index("sets_show_order_idx").on(t.showId, t.order)],
+);
+export type DrillSet = typeof sets.$inferSelect;
+
+export const positions = pgTable(
+  "positions",
+  {
+    setId: uuid("set_id")
+      .notNull()
+      .references(() => sets.id, { onDelete: "cascade" }),
+    performerId: uuid("performer_id")
+      .notNull()
+      .references(() => performers.id, { onDelete: "cascade" }),
+    x: doublePrecision("x").notNull(),
+    y: doublePrecision("y").notNull(),
+    facingDeg: doublePrecision("facing_deg").notNull().default(0),
+  },
+  (t) => [primaryKey({ columns: [t.setId, t.performerId] }), index("positions_performer_idx").on(t.performerId)],
+);
+export type PositionRow = typeof positions.$inferSelect;
+
+// A phrase spans the sets from firstSet to lastSet, inclusive, in set order.
+export const phrases = pgTable(
+  "phrases",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    showId: uuid("show_id")
+      .notNull()
+      .references(() => shows.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    order: integer("order").notNull(),
+    firstSetId: uuid("first_set_id")
+      .notNull()
+      .references(() => sets.id, { onDelete: "cascade" }),
+    lastSetId: uuid("last_set_id")
+      .notNull()
+      .references(() => sets.id, { onDelete: "cascade" }),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index("phrases_show_idx").on(t.showId)],
+);
+export type Phrase = typeof phrases.$inferSelect;
+
+// Per phrase, each section's voice and written dynamic; playedDynamic is an adopted plan (never overwrites the written one).
+export const voiceAssignments = pgTable(
+  "voice_assignments",
+  {
+    phraseId: uuid("phrase_id")
+      .notNull()
+      .references(() => phrases.id, { onDelete: "cascade" }),
+    section: text("section").notNull(),
+    voice: voiceEnum("voice").notNull(),
+    writtenDynamic: dynamicEnum("written_dynamic").notNull(),
+    playedDynamic: dynamicEnum("played_dynamic"),
+    updatedAt: updatedAt(),
+  },
+  (t) => [primaryKey({ columns: [t.phraseId, t.section] })],
+);
+export type VoiceAssignment = typeof voiceAssignments.$inferSelect;
+
+// A solo or a player laying out within a phrase.
+export const performerOverrides = pgTable(
+  "performer_overrides",
+  {
+    phraseId: uuid("phrase_id")
+      .notNull()
+      .references(() => phrases.id, { onDelete: "cascade" }),
+    performerId: uuid("performer_id")
+      .notNull()
+      .references(() => performers.id, { onDelete: "cascade" }),
+    voice: voiceEnum("voice").notNull(),
+    writtenDynamic: dynamicEnum("written_dynamic").notNull(),
+    playedDynamic: dynamicEnum("played_dynamic"),
+    note: text("note").notNull().default(""),
+  },
+  (t) => [primaryKey({ columns: [t.phraseId, t.performerId] })],
+);
+export type PerformerOverride = typeof performerOverrides.$inferSelect;
+
+// Stored box mixes: reused while the hash of their inputs and the model version are unchanged.
+export const analyses = pgTable(
+  "analyses",
+  {
+    setId: uuid("set_id")
+      .notNull()
+      .references(() => sets.id, { onDelete: "cascade" }),
+    listeningPointId: uuid("listening_point_id")
+      .notNull()
+      .references(() => listeningPoints.id, { onDelete: "cascade" }),
+    inputsHash: text("inputs_hash").notNull(),
+    modelVersion: text("model_version").notNull(),
+    result: jsonb("result").notNull(),
+    computedAt: timestamp("computed_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  },
+  (t) => [primaryKey({ columns: [t.setId, t.listeningPointId] })],
+);
+export type Analysis = typeof analyses.$inferSelect;
+

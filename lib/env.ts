@@ -1,0 +1,19 @@
+// The environment, validated once. Import `env` instead of reading process.env.
+import { z } from "zod";
+
+const schema = z.object({
+  NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
+  DATABASE_URL: z.string().url().default("postgres://postgres@127.0.0.1:5544/farfield"),
+  APP_BASE_URL: z.string().url().default("http://127.0.0.1:3000"),
+  DATABASE_POOL_SIZE: z.coerce.number().int().min(1).max(100).default(10),
+  SMTP_HOST: z.string().default("127.0.0.1"),
+  SMTP_PORT: z.coerce.number().int().default(2525),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  SMTP_FROM: z.string().default("Farfield <no-reply@farfield.example>"),
+  /** Cookies are Secure unless the app is served on plain http (local use). */
+  COOKIE_SECURE: z.enum(["true", "false"]).optional(),
+});
+
+export const env = schema.parse(process.env);
+export const cookieSecure = env.COOKIE_SECURE ? env.COOKIE_SECURE === "true" : env.APP_BASE_URL.startsWith("https:");
