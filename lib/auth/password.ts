@@ -1,7 +1,7 @@
 // Password hashing with argon2id (OWASP's first choice); parameters are the library's defaults.
 import { hash, verify } from "@node-rs/argon2";
 
-export const MIN_PASSWORD_LENGTH = 10;
+export { MIN_PASSWORD_LENGTH } from "./password-rules";
 
 export function hashPassword(plain: string): Promise<string> {
   return hash(plain);

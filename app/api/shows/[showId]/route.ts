@@ -1,0 +1,27 @@
+import { NextResponse } from "next/server";
+import { listListeningPoints, listPerformers, listSets } from "@/db/queries/shows";
+import { requireShow } from "@/lib/auth/access";
+import { route } from "@/lib/http/handler";
+
+export const GET = route<{ showId: string }>(async (_req, { showId }) => {
+  const { show, role } = await requireShow(showId, "read");
+  const [listeningPoints, performers, sets] = await Promise.all([listListeningPoints(showId), listPerformers(showId), listSets(showId)]);
+  return NextResponse.json({
+    show: {
+      id: show.id,
+      programId: show.programId,
+      name: show.name,
+      fieldRules: show.fieldRules,
+      conditions: {
+        temperatureC: show.temperatureC,
+        relativeHumidityPct: show.relativeHumidityPct,
+        pressureKPa: show.pressureKPa,
+        groundFactor: show.groundFactor,
+      },
+    },
+    role,
+    listeningPoints,
+    performers,
+    sets,
+  });
+});

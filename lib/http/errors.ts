@@ -1,0 +1,38 @@
+// Errors a route handler or server action may throw; the handler wrapper turns them into JSON answers.
+export class HttpError extends Error {
+  constructor(
+    readonly status: number,
+    message: string,
+    readonly extra: Record<string, unknown> = {},
+  ) {
+    super(message);
+  }
+}
+
+export const unauthorized = () => new HttpError(401, "Sign in to continue.");
+export const forbidden = (what = "Your role in this program may not do this.") => new HttpError(403, what);
+/** Unknown ids and ids of programs the user is not in answer the same, so nothing leaks. */
+export const notFound = (what = "Not found.") => new HttpError(404, what);
+export const conflict = (message: string, extra: Record<string, unknown> = {}) => new HttpError(409, message, extra);
+export const tooLarge = (message = "The request body is too large.") => new HttpError(413, message);
+export const tooManyAttempts = (message: string) => new HttpError(429, message);
+export const badRequest = (message: string, issues?: Record<string, string[]>) =>
+  new HttpError(400, message, issues ? { issues } : {});
+
+/** True for errors that mean the database cannot be reached (refused, reset, timed out, shutting down). */
+export function isDatabaseDown(err: unknown): boolean {
+  const seen = new Set<unknown>();
+  let e: unknown = err;
+  while (e && typeof e === "object" && !seen.has(e)) {
+    seen.add(e);
+    const code = (e as { code?: string }).code;
+    if (
+      code &&
+      ["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "CONNECT_TIMEOUT", "CONNECTION_CLOSED", "CONNECTION_ENDED", "CONNECTION_DESTROYED", "57P01", "57P02", "57P03", "08006", "08001", "08003", "08004"].includes(code)
+    ) {
+      return true;
+    }
+    e = (e as { cause?: unknown }).cause;
+  }
+  return false;
+}

@@ -1,0 +1,35 @@
+// One wrapper for every route handler: typed params, errors as JSON with the codes of shared/API.md.
+import { NextResponse } from "next/server";
+import { z } from "zod";
+import { fieldIssues } from "./body";
+import { HttpError, isDatabaseDown } from "./errors";
+
+type Ctx<P> = { params: Promise<P> };
+
+export function errorResponse(err: unknown): NextResponse {
+  if (err instanceof HttpError) {
+    return NextResponse.json({ error: err.message, ...err.extra }, { status: err.status });
+  }
+  if (err instanceof z.ZodError) {
+    return NextResponse.json({ error: "The request is not valid.", issues: fieldIssues(err) }, { status: 400 });
+  }
+  if (isDatabaseDown(err)) {
+    return NextResponse.json({ error: "The database cannot be reached right now. Try again in a moment." }, { status: 503 });
+  }
+  console.error("[farfield] unexpected error:", err instanceof Error ? err.stack : err);
+  return NextResponse.json({ error: "Something went wrong on our side." }, { status: 500 });
+}
+
+/** Wraps a handler: `handler` receives the request and the route params already awaited. */
+export function route<P = Record<string, string>>(handler: (req: Request, params: P) => Promise<Response>) {
+  return async (req: Request, ctx: Ctx<P>): Promise<Response> => {
+    try {
+      return await handler(req, await ctx.params);
+    } catch (err) {
+      return errorResponse(err);
+    }
+  };
+}
+
+/** Route ids are UUIDs; anything else is an unknown id (404), never a database error. */
+export const idSchema = z.string().uuid();

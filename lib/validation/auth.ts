@@ -1,0 +1,28 @@
+// Sign-in and sign-up input, shared by the forms and the route handlers.
+import { z } from "zod";
+import { MIN_PASSWORD_LENGTH } from "@/lib/auth/password-rules";
+
+const email = z
+  .string()
+  .trim()
+  .toLowerCase()
+  .max(254, "That e-mail address is too long.")
+  .email("Enter a valid e-mail address.");
+
+export const signInSchema = z.object({
+  email,
+  password: z.string().min(1, "Enter your password.").max(200, "That password is too long."),
+});
+
+export const signUpSchema = z.object({
+  name: z.string().trim().min(1, "Enter your name.").max(120, "That name is too long."),
+  email,
+  password: z
+    .string()
+    .min(MIN_PASSWORD_LENGTH, `Use at least ${MIN_PASSWORD_LENGTH} characters.`)
+    .max(200, "That password is too long."),
+  programName: z.string().trim().min(1, "Name your band program.").max(160, "That name is too long."),
+});
+
+export type SignInInput = z.infer<typeof signInSchema>;
+export type SignUpInput = z.infer<typeof signUpSchema>;
