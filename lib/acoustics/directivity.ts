@@ -5,7 +5,6 @@ import { AcousticsInputError, requireFinite } from "./errors";
 import type { InstrumentSpec } from "./types";
 
 const RAD_TO_DEG = 180 / Math.PI;
-const DEG_TO_RAD = Math.PI / 180;
 
 /** A directivity table flattened for the hot loop: values[b·n + i] at angles[i]. */
 export interface CompiledDirectivity {
@@ -58,13 +57,11 @@ export function directivityInto(out: Float64Array, d: CompiledDirectivity, angle
   for (let b = 0, k = i; b < BAND_COUNT; b++, k += n) out[b] = v[k] + (v[k + 1] - v[k]) * t;
 }
 
-/** Horizontal unit vector of a facing: 0° toward the front sideline (−y), 90° toward side 2 (+x). */
-export function facingVector(facingDeg: number): { fx: number; fy: number } {
-  const a = facingDeg * DEG_TO_RAD;
-  return { fx: Math.sin(a), fy: -Math.cos(a) };
-}
-
-/** Angle (degrees, 0…180) between a horizontal facing (fx, fy) and the 3-D direction (dx, dy, dz) of length r. */
+/**
+ * Angle (degrees, 0…180) between a horizontal facing unit vector (fx, fy) and the 3-D direction
+ * (dx, dy, dz) of length r; dz does not enter the dot product since the facing is horizontal.
+ * Facing 0° is toward the front sideline (fx, fy) = (0, −1); 90° toward side 2, (1, 0).
+ */
 export function angleFromFacingDeg(fx: number, fy: number, dx: number, dy: number, r: number): number {
   const c = (fx * dx + fy * dy) / r;
   return Math.acos(c > 1 ? 1 : c < -1 ? -1 : c) * RAD_TO_DEG;

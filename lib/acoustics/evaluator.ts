@@ -1,0 +1,282 @@
+// The reusable set evaluator: validates and precomputes everything that does not depend on
+// positions once (source bands, absorption, A-weights, directivity and ground height terms),
+// then evaluates the mix for any positions with an allocation-free loop over Float64Arrays.
+// analyzeSet is built on it; transition sweeps move the positions and evaluate again.
+import { absorptionDbPerKmUnchecked, speedOfSound } from "./atmosphere";
+import { BAND_COUNT, OCTAVE_BANDS } from "./bands";
+import { DEFAULT_INSTRUMENTS } from "./catalog";
+import { angleFromFacingDeg, compileDirectivity, directivityInto, type CompiledDirectivity } from "./directivity";
+import { AcousticsInputError } from "./errors";
+import { GROUND_TERM_COUNT, groundBandsInto, regionTermsInto } from "./ground";
+import { instrumentBandsInto, validateInstrumentSpec } from "./instrument";
+import { aWeightingDb } from "./weighting";
+import { DEFAULT_SOURCE_HEIGHT_M, validateConditions, validateListeningPoints, validatePerformers } from "./validate";
+import {
+  VOICES,
+  type AnalysisInput,
+  type AnalysisResult,
+  type InstrumentCatalog,
+  type LevelSummary,
+  type PointResult,
+  type Position,
+  type Voice,
+} from "./types";
+
+/** Closer than this the point-source model does not hold; distances are clamped to it. */
+export const MIN_DISTANCE_M = 0.5;
+
+const DB_TO_LN = Math.LN10 / 10;
+const DEG_TO_RAD = Math.PI / 180;
+/** A-weighting of each band as an energy factor, at the exact centres. */
+const A_WEIGHT_ENERGY = Float64Array.from(OCTAVE_BANDS, (b) => 10 ** (aWeightingDb(b.exactHz) / 10));
+
+/** Levels of the last evaluation, in reusable typed arrays (overwritten by the next one). */
+export interface MixBuffers {
+  readonly sectionNames: readonly string[];
+  /** A-weighted total per listening point (dBA; -Infinity when nothing sounds). */
+  readonly totalDbA: Float64Array;
+  /** dBA per point and voice: [point · VOICES.length + voice index], -Infinity for an absent voice. */
+  readonly voiceDbA: Float64Array;
+  /** dBA per point and section: [point · sectionNames.length + section index]. */
+  readonly sectionDbA: Float64Array;
+  /** Arrival spread per point (ms) between the nearest and farthest sounding performer. */
+  readonly arrivalSpreadMs: Float64Array;
+}
+
+export interface SetEvaluator {
+  readonly performerIds: readonly string[];
+  /** Positions in performer order; write them directly (checked at evaluate) or use setPositions. */
+  readonly x: Float64Array;
+  readonly y: Float64Array;
+  readonly facingDeg: Float64Array;
+  readonly mix: MixBuffers;
+  /** Index of a performer in the arrays, or -1. */
+  indexOf(performerId: string): number;
+  /** Moves the listed performers (others keep their place). */
+  setPositions(positions: readonly Position[]): void;
+  /** Recomputes the mix for the current positions; returns the (reused) buffers. */
+  evaluate(): MixBuffers;
+  /** The full result of the last evaluate(), as analyzeSet returns it. */
+  result(): AnalysisResult;
+}
+
+/** Validates an analysis input and prepares an evaluator for it. */
+export function createSetEvaluator(input: AnalysisInput): SetEvaluator {
+  if (input === null || typeof input !== "object") throw new AcousticsInputError("input", "must be an object");
+  const catalog: InstrumentCatalog = input.instruments ? { ...DEFAULT_INSTRUMENTS, ...input.instruments } : DEFAULT_INSTRUMENTS;
+  const { performers, listeningPoints: points, conditions } = input;
+  if (conditions === null || typeof conditions !== "object") throw new AcousticsInputError("conditions", "must be an object");
+  validateConditions(conditions);
+  validatePerformers(performers, (key) => Object.hasOwn(catalog, key));
+  validateListeningPoints(points);
+
+  const P = performers.length;
+  const N = points.length;
+  const B = BAND_COUNT;
+  const V = VOICES.length;
+  const g = conditions.groundFactor;
+  const msPerM = 1000 / speedOfSound(conditions.temperatureC);
+  const alphaDbPerM = Float64Array.from(OCTAVE_BANDS, (b) => absorptionDbPerKmUnchecked(b.exactHz, conditions) / 1000);
+
+  // Per instrument: checked once, directivity flattened; per instrument and dynamic: band powers.
+  const directivities = new Map<string, CompiledDirectivity>();
+  const bandCache = new Map<string, Float64Array>();
+  const sectionIndex = new Map<string, number>();
+  const sectionNames: string[] = [];
+  const base = new Float64Array(P * B); // Lw + carry + strength per performer and band
+  const z = new Float64Array(P);
+  const srcTerms = new Float64Array(P * GROUND_TERM_COUNT);
+  const sectionOf = new Int32Array(P);
+  const voiceOf = new Int32Array(P); // -1 for tacet
+  const dirOf: CompiledDirectivity[] = new Array(P);
+  const x = new Float64Array(P);
+  const y = new Float64Array(P);
+  const facingDeg = new Float64Array(P);
+  const indexById = new Map<string, number>();
+
+  for (let p = 0; p < P; p++) {
+    const perf = performers[p];
+    const spec = catalog[perf.instrument];
+    let dir = directivities.get(perf.instrument);
+    if (!dir) {
+      validateInstrumentSpec(spec, `instruments.${perf.instrument}`);
+      dir = compileDirectivity(spec.directivity, `instruments.${perf.instrument}.directivity`);
+      directivities.set(perf.instrument, dir);
+    }
+    dirOf[p] = dir;
+    const key = `${perf.instrument}\u0000${perf.dynamic}`;
+    let bands = bandCache.get(key);
+    if (!bands) {
+      bands = new Float64Array(B);
+      instrumentBandsInto(spec, perf.dynamic, bands);
+      bandCache.set(key, bands);
+    }
+    const offset = spec.carryDb + (perf.strengthDb ?? 0);
+    for (let b = 0; b < B; b++) base[p * B + b] = bands[b] + offset;
+    let s = sectionIndex.get(perf.section);
+    if (s === undefined) {
+      s = sectionNames.length;
+      sectionIndex.set(perf.section, s);
+      sectionNames.push(perf.section);
+    }
+    sectionOf[p] = s;
+    voiceOf[p] = perf.voice === "tacet" ? -1 : VOICES.indexOf(perf.voice);
+    z[p] = perf.z ?? DEFAULT_SOURCE_HEIGHT_M;
+    regionTermsInto(z[p], srcTerms, p * GROUND_TERM_COUNT);
+    x[p] = perf.x;
+    y[p] = perf.y;
+    facingDeg[p] = perf.facingDeg;
+    indexById.set(perf.id, p);
+  }
+
+  const S = sectionNames.length;
+  const rcvTerms = new Float64Array(N * GROUND_TERM_COUNT);
+  points.forEach((pt, i) => regionTermsInto(pt.z, rcvTerms, i * GROUND_TERM_COUNT));
+  const lx = Float64Array.from(points, (pt) => pt.x);
+  const ly = Float64Array.from(points, (pt) => pt.y);
+  const lz = Float64Array.from(points, (pt) => pt.z);
+
+  // Outputs of the hot loop.
+  const perfDb = new Float64Array(N * P * B);
+  const arrivalMs = new Float64Array(N * P);
+  const sectionE = new Float64Array(N * S * B);
+  const voiceE = new Float64Array(N * V * B);
+  const totalE = new Float64Array(N * B);
+  const mix: MixBuffers = {
+    sectionNames,
+    totalDbA: new Float64Array(N),
+    voiceDbA: new Float64Array(N * V),
+    sectionDbA: new Float64Array(N * S),
+    arrivalSpreadMs: new Float64Array(N),
+  };
+  // Scratch, reused by every pair.
+  const fx = new Float64Array(P);
+  const fy = new Float64Array(P);
+  const dirDb = new Float64Array(B);
+  const grDb = new Float64Array(B);
+  perfDb.fill(-Infinity); // tacet performers stay at -Infinity
+
+  function weightedDb(energy: Float64Array, offset: number): number {
+    let e = 0;
+    for (let b = 0; b < B; b++) e += energy[offset + b] * A_WEIGHT_ENERGY[b];
+    return 10 * Math.log10(e);
+  }
+
+  function evaluate(): MixBuffers {
+    for (let p = 0; p < P; p++) {
+      if (!Number.isFinite(x[p]) || !Number.isFinite(y[p]) || !Number.isFinite(facingDeg[p])) {
+        const field = !Number.isFinite(x[p]) ? "x" : !Number.isFinite(y[p]) ? "y" : "facingDeg";
+        throw new AcousticsInputError(`positions[${p}].${field}`, "must be a finite number");
+      }
+      const a = facingDeg[p] * DEG_TO_RAD;
+      fx[p] = Math.sin(a);
+      fy[p] = -Math.cos(a);
+    }
+    sectionE.fill(0);
+    voiceE.fill(0);
+    totalE.fill(0);
+    for (let n = 0; n < N; n++) {
+      let minMs = Infinity;
+      let maxMs = -Infinity;
+      const rOff = n * GROUND_TERM_COUNT;
+      for (let p = 0; p < P; p++) {
+        const dx = lx[n] - x[p];
+        const dy = ly[n] - y[p];
+        const dz = lz[n] - z[p];
+        const dp = Math.sqrt(dx * dx + dy * dy);
+        let r = Math.sqrt(dp * dp + dz * dz);
+        if (r < MIN_DISTANCE_M) r = MIN_DISTANCE_M;
+        const ms = r * msPerM;
+        arrivalMs[n * P + p] = ms;
+        const v = voiceOf[p];
+        if (v < 0) continue;
+        if (ms < minMs) minMs = ms;
+        if (ms > maxMs) maxMs = ms;
+        directivityInto(dirDb, dirOf[p], angleFromFacingDeg(fx[p], fy[p], dx, dy, r));
+        if (g === null) grDb.fill(0);
+        else groundBandsInto(grDb, g, srcTerms, p * GROUND_TERM_COUNT, rcvTerms, rOff, z[p] + lz[n], dp);
+        const common = -(20 * Math.log10(r) + 11); // ISO 9613-2 eq. (7)
+        const pOff = (n * P + p) * B;
+        const sOff = (n * S + sectionOf[p]) * B;
+        const vOff = (n * V + v) * B;
+        const tOff = n * B;
+        for (let b = 0; b < B; b++) {
+          const level = base[p * B + b] + dirDb[b] + common - alphaDbPerM[b] * r - grDb[b];
+          perfDb[pOff + b] = level;
+          const e = Math.exp(level * DB_TO_LN);
+          sectionE[sOff + b] += e;
+          voiceE[vOff + b] += e;
+          totalE[tOff + b] += e;
+        }
+      }
+      mix.arrivalSpreadMs[n] = maxMs >= minMs ? maxMs - minMs : 0;
+      mix.totalDbA[n] = weightedDb(totalE, n * B);
+      for (let v = 0; v < V; v++) mix.voiceDbA[n * V + v] = weightedDb(voiceE, (n * V + v) * B);
+      for (let s = 0; s < S; s++) mix.sectionDbA[n * S + s] = weightedDb(sectionE, (n * S + s) * B);
+    }
+    return mix;
+  }
+
+  function bandsDbOf(energy: Float64Array, offset: number): number[] {
+    const out = new Array<number>(B);
+    for (let b = 0; b < B; b++) out[b] = 10 * Math.log10(energy[offset + b]);
+    return out;
+  }
+
+  function result(): AnalysisResult {
+    const out: PointResult[] = [];
+    for (let n = 0; n < N; n++) {
+      const voices: Partial<Record<Voice, LevelSummary>> = {};
+      for (let v = 0; v < V; v++) {
+        const dbA = mix.voiceDbA[n * V + v];
+        if (dbA > -Infinity) voices[VOICES[v]] = { dbA, bandsDb: bandsDbOf(voiceE, (n * V + v) * B) };
+      }
+      const sections: Record<string, LevelSummary> = {};
+      for (let s = 0; s < S; s++) {
+        sections[sectionNames[s]] = { dbA: mix.sectionDbA[n * S + s], bandsDb: bandsDbOf(sectionE, (n * S + s) * B) };
+      }
+      const perfs = performers.map((perf, p) => {
+        const pOff = (n * P + p) * B;
+        const bandsDb = Array.from(perfDb.subarray(pOff, pOff + B));
+        let e = 0;
+        for (let b = 0; b < B; b++) e += Math.exp(bandsDb[b] * DB_TO_LN) * A_WEIGHT_ENERGY[b];
+        return { id: perf.id, dbA: 10 * Math.log10(e), bandsDb, arrivalMs: arrivalMs[n * P + p] };
+      });
+      out.push({
+        listeningPointId: points[n].id,
+        totalDbA: mix.totalDbA[n],
+        voices,
+        sections,
+        performers: perfs,
+        arrivalSpreadMs: mix.arrivalSpreadMs[n],
+      });
+    }
+    return { points: out };
+  }
+
+  function setPositions(positions: readonly Position[]): void {
+    if (!Array.isArray(positions)) throw new AcousticsInputError("positions", "must be an array");
+    positions.forEach((pos, i) => {
+      const p = indexById.get(pos?.performerId);
+      if (p === undefined) throw new AcousticsInputError(`positions[${i}].performerId`, `"${String(pos?.performerId)}" is not a performer of this set`);
+      if (!Number.isFinite(pos.x)) throw new AcousticsInputError(`positions[${i}].x`, "must be a finite number");
+      if (!Number.isFinite(pos.y)) throw new AcousticsInputError(`positions[${i}].y`, "must be a finite number");
+      if (!Number.isFinite(pos.facingDeg)) throw new AcousticsInputError(`positions[${i}].facingDeg`, "must be a finite number");
+      x[p] = pos.x;
+      y[p] = pos.y;
+      facingDeg[p] = pos.facingDeg;
+    });
+  }
+
+  return {
+    performerIds: performers.map((p) => p.id),
+    x,
+    y,
+    facingDeg,
+    mix,
+    indexOf: (id) => indexById.get(id) ?? -1,
+    setPositions,
+    evaluate,
+    result,
+  };
+}

@@ -1,0 +1,17 @@
+// Public surface of the acoustic engine (pure TypeScript; runs on the server and in the browser).
+export * from "./types";
+export { OCTAVE_BANDS, BAND_COUNT, nearestBandIndex, type OctaveBand } from "./bands";
+export { AcousticsInputError } from "./errors";
+export { airAbsorptionDbPerKm, speedOfSound, type AirConditions } from "./atmosphere";
+export { aWeightingDb } from "./weighting";
+export { sumLevelsDb, divergenceDb, dbToEnergy, energyToDb } from "./levels";
+export { groundAttenuationDb, type GroundQuery } from "./ground";
+export { directivityDb } from "./directivity";
+export { DEFAULT_INSTRUMENTS, EVEREST_PEAK_LW_DB } from "./catalog";
+export { instrumentLevelDb, dynamicChangeDb, shiftDynamic, dynamicIndex } from "./instrument";
+export { DEFAULT_SOURCE_HEIGHT_M } from "./validate";
+export { createSetEvaluator, MIN_DISTANCE_M, type SetEvaluator, type MixBuffers } from "./evaluator";
+export { analyzeSet } from "./analyze";
+export { positionsAtCount, positionsBetweenInto, facingBetweenDeg, transitionFraction, normalizeDeg } from "./transition";
+export { exposureLimitMinutes, dailyDose, type ExposureStandard } from "./exposure";
+export { toJsonSafe, type JsonSafe } from "./json";
