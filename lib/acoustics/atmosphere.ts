@@ -21,22 +21,35 @@ export function validateAir(air: AirConditions, prefix = ""): void {
   if (p <= 0 || p > 200) throw new AcousticsInputError(`${prefix}pressureKPa`, "must be above 0 and at most 200");
 }
 
-/** ISO 9613-1 pure-tone absorption coefficient α in dB/km; inputs checked by the caller. */
+/** Saturation vapour pressure (kPa) over water, ISO 9613-1 Annex B: psat/pr = 10^C. */
+export function saturationVapourPressureKPa(temperatureC: number): number {
+  const T = temperatureC + 273.15;
+  return PR * 10 ** (-6.8346 * (T01 / T) ** 1.261 + 4.6151);
+}
+
+/** ISO 9613-1 intermediate values: water vapour h (%), relaxation frequencies frO and frN (Hz). */
+export function relaxationFrequencies(air: AirConditions): { h: number; frO: number; frN: number } {
+  const pa = air.pressureKPa / PR;
+  const h = (air.relativeHumidityPct * saturationVapourPressureKPa(air.temperatureC)) / air.pressureKPa;
+  const tr = (air.temperatureC + 273.15) / T0;
+  const frO = pa * (24 + (4.04e4 * h * (0.02 + h)) / (0.391 + h)); // eq. (3)
+  const frN = pa * tr ** -0.5 * (9 + 280 * h * Math.exp(-4.17 * (tr ** (-1 / 3) - 1))); // eq. (4)
+  return { h, frO, frN };
+}
+
+/** ISO 9613-1 pure-tone absorption coefficient α in dB/km, eq. (5); inputs checked by the caller. */
 export function absorptionDbPerKmUnchecked(frequencyHz: number, air: AirConditions): number {
   const T = air.temperatureC + 273.15;
   const pa = air.pressureKPa / PR;
-  const C = -6.8346 * (T01 / T) ** 1.261 + 4.6151; // Annex B
-  const h = (air.relativeHumidityPct * 10 ** C) / pa; // molar concentration of water vapour, %
-  const frO = pa * (24 + (4.04e4 * h * (0.02 + h)) / (0.391 + h)); // eq. (3)
   const tr = T / T0;
-  const frN = pa * tr ** -0.5 * (9 + 280 * h * Math.exp(-4.17 * (tr ** (-1 / 3) - 1))); // eq. (4)
+  const { frO, frN } = relaxationFrequencies(air);
   const f2 = frequencyHz * frequencyHz;
   const alphaDbPerM =
     8.686 *
     f2 *
-    (1.84e-11 / pa * tr ** 0.5 +
+    ((1.84e-11 / pa) * tr ** 0.5 +
       tr ** -2.5 *
-        ((0.01275 * Math.exp(-2239.1 / T)) / (frO + f2 / frO) + (0.1068 * Math.exp(-3352.0 / T)) / (frN + f2 / frN))); // eq. (5)
+        ((0.01275 * Math.exp(-2239.1 / T)) / (frO + f2 / frO) + (0.1068 * Math.exp(-3352.0 / T)) / (frN + f2 / frN)));
   return alphaDbPerM * 1000;
 }
 

@@ -2,7 +2,13 @@
 export * from "./types";
 export { OCTAVE_BANDS, BAND_COUNT, nearestBandIndex, type OctaveBand } from "./bands";
 export { AcousticsInputError } from "./errors";
-export { airAbsorptionDbPerKm, speedOfSound, type AirConditions } from "./atmosphere";
+export {
+  airAbsorptionDbPerKm,
+  speedOfSound,
+  saturationVapourPressureKPa,
+  relaxationFrequencies,
+  type AirConditions,
+} from "./atmosphere";
 export { aWeightingDb } from "./weighting";
 export { sumLevelsDb, divergenceDb, dbToEnergy, energyToDb } from "./levels";
 export { groundAttenuationDb, type GroundQuery } from "./ground";
