@@ -1,0 +1,121 @@
+import { describe, expect, it } from "vitest";
+import {
+  BAND_COUNT,
+  DEFAULT_INSTRUMENTS,
+  DYNAMICS,
+  EVEREST_PEAK_LW_DB,
+  dynamicChangeDb,
+  instrumentLevelDb,
+  shiftDynamic,
+  sumLevelsDb,
+} from "@/lib/acoustics";
+
+const KEYS = [
+  "flute", "piccolo", "clarinet", "bass-clarinet", "alto-sax", "tenor-sax", "bari-sax", "trumpet", "mellophone",
+  "trombone", "baritone", "tuba", "snare", "tenors", "bass-drum", "cymbals", "marimba", "vibraphone", "synth",
+];
+const entries = Object.entries(DEFAULT_INSTRUMENTS);
+const bandsAt = (key: string, d: (typeof DYNAMICS)[number]) =>
+  Array.from({ length: BAND_COUNT }, (_, b) => instrumentLevelDb(DEFAULT_INSTRUMENTS[key], d, b));
+
+describe("default instrument catalog", () => {
+  it("holds every instrument of the issue with family, register, carryDb and a source", () => {
+    for (const k of KEYS) {
+      const s = DEFAULT_INSTRUMENTS[k];
+      expect(s, k).toBeDefined();
+      expect(["woodwind", "brass", "percussion", "keyboard", "amplified"]).toContain(s.family);
+      expect(["soprano", "alto", "tenor", "bass"]).toContain(s.register);
+      expect(Number.isFinite(s.carryDb)).toBe(true);
+      expect(s.source.length).toBeGreaterThan(0);
+    }
+    expect(DEFAULT_INSTRUMENTS.synth.family).toBe("amplified");
+  });
+
+  it("transcribes Everest, Master Handbook of Acoustics, Table 5-1 watts as Lw re 1 pW", () => {
+    const watts: Record<string, number> = { "bass-drum": 25, snare: 12, cymbals: 10, trombone: 6, trumpet: 0.3, tuba: 0.2, piccolo: 0.08, flute: 0.06, clarinet: 0.05 };
+    for (const [k, w] of Object.entries(watts)) expect(Math.abs(EVEREST_PEAK_LW_DB[k] - 10 * Math.log10(w / 1e-12))).toBeLessThan(0.05);
+  });
+
+  it("keeps ff and fff at or below the Everest Table 5-1 peak power (peaks are upper bounds)", () => {
+    for (const [k, peak] of Object.entries(EVEREST_PEAK_LW_DB)) {
+      expect(DEFAULT_INSTRUMENTS[k].powerDb.ff).toBeLessThanOrEqual(peak);
+      expect(DEFAULT_INSTRUMENTS[k].powerDb.fff).toBeLessThanOrEqual(peak);
+      expect(DEFAULT_INSTRUMENTS[k].source).toMatch(/Everest/);
+    }
+  });
+
+  it("raises every band with every dynamic step (from memory: levels rise pp → fff)", () => {
+    for (const [k] of entries) {
+      for (let i = 1; i < DYNAMICS.length; i++) {
+        const lo = bandsAt(k, DYNAMICS[i - 1]);
+        const hi = bandsAt(k, DYNAMICS[i]);
+        hi.forEach((v, b) => expect(v, `${k} ${DYNAMICS[i]} band ${b}`).toBeGreaterThan(lo[b]));
+      }
+    }
+  });
+
+  it("spans 10–30 dB from pp to ff (from memory, not checked)", () => {
+    for (const [k, s] of entries) {
+      const span = s.powerDb.ff - s.powerDb.pp;
+      expect(span, k).toBeGreaterThanOrEqual(10);
+      expect(span, k).toBeLessThanOrEqual(30);
+    }
+  });
+
+  it("puts woodwinds at 60–70 dB Lw at pp and 95–105 at ff, brass ff at 110–120 (from memory, not checked)", () => {
+    for (const [k, s] of entries) {
+      if (s.family === "woodwind") {
+        expect(s.powerDb.pp, k).toBeGreaterThanOrEqual(60);
+        expect(s.powerDb.pp, k).toBeLessThanOrEqual(72); // piccolo a little above
+        expect(s.powerDb.ff, k).toBeGreaterThanOrEqual(95);
+        expect(s.powerDb.ff, k).toBeLessThanOrEqual(105);
+      }
+      if (s.family === "brass") {
+        expect(s.powerDb.ff, k).toBeGreaterThanOrEqual(109);
+        expect(s.powerDb.ff, k).toBeLessThanOrEqual(120);
+      }
+    }
+  });
+
+  it("has every brass ff above every woodwind ff, and woodwinds carrying worse than brass", () => {
+    const ww = entries.filter(([, s]) => s.family === "woodwind").map(([, s]) => s);
+    const br = entries.filter(([, s]) => s.family === "brass").map(([, s]) => s);
+    expect(Math.min(...br.map((s) => s.powerDb.ff))).toBeGreaterThan(Math.max(...ww.map((s) => s.powerDb.ff)));
+    expect(Math.max(...ww.map((s) => s.carryDb))).toBeLessThan(Math.min(...br.map((s) => s.carryDb)));
+  });
+
+  it("sums the bands of a dynamic to its overall powerDb (the spectrum is a shape only)", () => {
+    for (const [k, s] of entries) for (const d of DYNAMICS) expect(sumLevelsDb(bandsAt(k, d))).toBeCloseTo(s.powerDb[d], 9);
+  });
+
+  it("brightens with dynamic: the 4 kHz band gains more than the 125 Hz band from p to ff for brass", () => {
+    const t = DEFAULT_INSTRUMENTS.trumpet;
+    expect(dynamicChangeDb(t, "p", "ff", 6)).toBeGreaterThan(dynamicChangeDb(t, "p", "ff", 1));
+    expect(dynamicChangeDb(t, "p", "ff")).toBeCloseTo(t.powerDb.ff - t.powerDb.p, 12);
+  });
+
+  it("steps dynamics within pp…fff", () => {
+    expect(shiftDynamic("p", 2)).toBe("mf");
+    expect(shiftDynamic("mf", -3)).toBe("pp");
+    expect(shiftDynamic("ff", 2)).toBeNull();
+    expect(shiftDynamic("pp", -1)).toBeNull();
+  });
+
+  it("radiates bells forward: trumpet at least 6 dB down at 90° and 15 dB behind at 2 kHz, near omni below 500 Hz (from memory)", () => {
+    const d = DEFAULT_INSTRUMENTS.trumpet.directivity;
+    const at = (band: number, angle: number) => d.bandsDb[band][d.anglesDeg.indexOf(angle)];
+    expect(at(5, 90)).toBeLessThanOrEqual(-6);
+    expect(at(5, 90)).toBeGreaterThanOrEqual(-10);
+    expect(at(5, 180)).toBeLessThanOrEqual(-15);
+    expect(at(5, 180)).toBeGreaterThanOrEqual(-20);
+    for (let b = 0; b <= 2; b++) expect(Math.min(...d.bandsDb[b])).toBeGreaterThanOrEqual(-3);
+    const cl = DEFAULT_INSTRUMENTS.clarinet.directivity;
+    for (let b = 0; b <= 4; b++) expect(Math.min(...cl.bandsDb[b])).toBeGreaterThanOrEqual(-3); // woodwinds within a few dB below 1 kHz
+  });
+
+  it("is frozen so callers cannot change the defaults by accident", () => {
+    expect(() => {
+      (DEFAULT_INSTRUMENTS.trumpet as { carryDb: number }).carryDb = 5;
+    }).toThrow();
+  });
+});
