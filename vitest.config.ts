@@ -14,7 +14,7 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: "db",
-          include: ["tests/db/**/*.test.ts"],
+          include: ["tests/db/**/*.test.ts", "tests/api/**/*.test.ts"],
           environment: "node",
           fileParallelism: false,
           testTimeout: 30_000,

@@ -1,0 +1,95 @@
+// Sign-up, sign-in, sign-out and the session cookie, against the running app and its PostgreSQL.
+import { readFileSync } from "node:fs";
+import { afterAll, describe, expect, it } from "vitest";
+import { Client, DEMO, signedIn, uniqueEmail } from "../support/api";
+import { appDatabase } from "../support/database";
+
+const sql = appDatabase();
+afterAll(() => sql.end());
+
+describe("session", () => {
+  it("signs up: the new user directs a new program of their own", async () => {
+    const c = new Client();
+    const email = uniqueEmail("signup");
+    const res = await c.post("/api/auth/sign-up", { name: "Riley Okafor", email, password: "long-enough-pass", programName: "Test Valley Band" });
+    expect(res.status).toBe(201);
+    const me = await c.get("/api/me");
+    expect(me.status).toBe(200);
+    expect(me.body.user.email).toBe(email);
+    expect(me.body.memberships).toEqual([{ programId: res.body.programId, programName: "Test Valley Band", role: "director" }]);
+    const again = await new Client().post("/api/auth/sign-up", { name: "X", email, password: "long-enough-pass", programName: "Again" });
+    expect(again.status).toBe(409);
+  });
+
+  it("signs in with the demo director and answers /api/me per the contract", async () => {
+    const c = await signedIn(DEMO.director);
+    const me = await c.get("/api/me");
+    expect(me.status).toBe(200);
+    expect(Object.keys(me.body.user).sort()).toEqual(["email", "id", "name"]);
+    expect(me.body.memberships.some((m: any) => m.role === "director" && m.programName.startsWith("Harbor Ridge"))).toBe(true);
+  });
+
+  it("answers 401 with one message for a wrong password and an unknown e-mail", async () => {
+    const wrong = await new Client().post("/api/auth/sign-in", { email: DEMO.staff, password: "not-the-password" });
+    const unknown = await new Client().post("/api/auth/sign-in", { email: uniqueEmail("nobody"), password: "whatever-it-is" });
+    expect(wrong.status).toBe(401);
+    expect(unknown.status).toBe(401);
+    expect(wrong.body.error).toBe(unknown.body.error);
+  });
+
+  it("sets an httpOnly SameSite cookie and ends the session on sign-out", async () => {
+    const c = new Client();
+    const res = await c.post("/api/auth/sign-in", { email: DEMO.designer, password: process.env.DEMO_PASSWORD ?? "farfield-demo" });
+    const setCookie = res.headers.get("set-cookie") ?? "";
+    expect(setCookie).toMatch(/HttpOnly/i);
+    expect(setCookie).toMatch(/SameSite=Lax/i);
+    const cookie = c.cookie!;
+    expect((await c.post("/api/auth/sign-out")).status).toBe(204);
+    const stale = new Client();
+    stale.cookie = cookie;
+    expect((await stale.get("/api/me")).status).toBe(401);
+  });
+
+  it("rotates the session on sign-in: the old token stops working", async () => {
+    const c = await signedIn(DEMO.staff);
+    const first = c.cookie!;
+    await c.post("/api/auth/sign-in", { email: DEMO.staff, password: process.env.DEMO_PASSWORD ?? "farfield-demo" });
+    expect(c.cookie).not.toBe(first);
+    const old = new Client();
+    old.cookie = first;
+    expect((await old.get("/api/me")).status).toBe(401);
+    expect((await c.get("/api/me")).status).toBe(200);
+  });
+
+  it("stores sessions hashed and passwords as argon2id, never in clear, nor in the log", async () => {
+    const email = uniqueEmail("hash");
+    const password = "clear-text-sentinel-4711";
+    const c = new Client();
+    await c.post("/api/auth/sign-up", { name: "Hash Check", email, password, programName: "Hash Band" });
+    const [user] = await sql<{ id: string; password_hash: string }[]>`select id, password_hash from users where email = ${email}`;
+    expect(user!.password_hash.startsWith("$argon2id$")).toBe(true);
+    expect(user!.password_hash).not.toContain(password);
+    const token = decodeURIComponent(c.cookie!.split("=")[1]!);
+    const sessions = await sql<{ id: string }[]>`select id from sessions where user_id = ${user!.id}`;
+    expect(sessions.length).toBe(1);
+    expect(sessions[0]!.id).not.toBe(token);
+    expect(sessions[0]!.id).toMatch(/^[0-9a-f]{64}$/);
+    const dump = await sql`select * from users where email = ${email}`;
+    expect(JSON.stringify(dump)).not.toContain(password);
+    if (process.env.APP_LOG) expect(readFileSync(process.env.APP_LOG, "utf8")).not.toContain(password);
+  });
+
+  it("limits failed sign-ins per account with 429, counted in PostgreSQL", async () => {
+    const email = uniqueEmail("limit");
+    const c = new Client();
+    await c.post("/api/auth/sign-up", { name: "Limit Check", email, password: "the-right-password", programName: "Limit Band" });
+    const statuses: number[] = [];
+    for (let i = 0; i < 10; i++) statuses.push((await new Client().post("/api/auth/sign-in", { email, password: `wrong-${i}` })).status);
+    expect(statuses.slice(0, 3)).toEqual([401, 401, 401]);
+    expect(statuses).toContain(429);
+    // Even the right password is refused while the account is locked.
+    expect((await new Client().post("/api/auth/sign-in", { email, password: "the-right-password" })).status).toBe(429);
+    const [{ n }] = await sql<{ n: number }[]>`select count(*)::int as n from sign_in_attempts where key = ${"account:" + email}`;
+    expect(n).toBeGreaterThanOrEqual(8);
+  });
+});

@@ -1,0 +1,89 @@
+// An HTTP client for the running app (scripts/test.sh exports APP_URL), carrying its own session cookie.
+export const APP_URL = process.env.APP_URL ?? "http://127.0.0.1:3000";
+export const DEMO_PASSWORD = process.env.DEMO_PASSWORD ?? "farfield-demo";
+
+export const DEMO = {
+  director: "director@harbor-ridge.example",
+  designer: "designer@harbor-ridge.example",
+  staff: "staff@harbor-ridge.example",
+  otherDirector: "director@westbrook.example",
+} as const;
+
+export interface ApiAnswer<T = any> {
+  status: number;
+  body: T;
+  headers: Headers;
+}
+
+export class Client {
+  cookie: string | null = null;
+
+  async call<T = any>(method: string, path: string, body?: unknown, init: { headers?: Record<string, string>; raw?: string } = {}): Promise<ApiAnswer<T>> {
+    const headers: Record<string, string> = { ...(init.headers ?? {}) };
+    if (this.cookie) headers.cookie = this.cookie;
+    let payload: string | undefined = init.raw;
+    if (body !== undefined) {
+      payload = JSON.stringify(body);
+      headers["content-type"] = "application/json";
+    }
+    const res = await fetch(APP_URL + path, { method, headers, body: payload, redirect: "manual" });
+    const setCookie = res.headers.get("set-cookie");
+    if (setCookie) {
+      const pair = setCookie.split(";")[0]!;
+      this.cookie = pair.endsWith("=") ? null : pair;
+    }
+    const text = await res.text();
+    let parsed: any = text;
+    try {
+      parsed = text ? JSON.parse(text) : null;
+    } catch {}
+    return { status: res.status, body: parsed as T, headers: res.headers };
+  }
+
+  get<T = any>(path: string) {
+    return this.call<T>("GET", path);
+  }
+  post<T = any>(path: string, body?: unknown) {
+    return this.call<T>("POST", path, body);
+  }
+  put<T = any>(path: string, body?: unknown) {
+    return this.call<T>("PUT", path, body);
+  }
+}
+
+export async function signedIn(email: string, password = DEMO_PASSWORD): Promise<Client> {
+  const c = new Client();
+  const res = await c.post("/api/auth/sign-in", { email, password });
+  if (res.status !== 200) throw new Error(`sign-in as ${email} answered ${res.status}: ${JSON.stringify(res.body)}`);
+  return c;
+}
+
+/** Ids of the demo: the Harbor Ridge program, its show, its sets and listening points, and the second program. */
+export async function demoIds() {
+  const director = await signedIn(DEMO.director);
+  const me = await director.get("/api/me");
+  const program = me.body.memberships.find((m: any) => m.programName.startsWith("Harbor Ridge"));
+  const shows = await director.get(`/api/programs/${program.programId}/shows`);
+  const showId = shows.body.shows[0].id as string;
+  const show = await director.get(`/api/shows/${showId}`);
+  const other = await signedIn(DEMO.otherDirector);
+  const otherMe = await other.get("/api/me");
+  const otherProgramId = otherMe.body.memberships[0].programId as string;
+  const otherShows = await other.get(`/api/programs/${otherProgramId}/shows`);
+  return {
+    programId: program.programId as string,
+    showId,
+    show: show.body,
+    setIds: show.body.sets.map((s: any) => s.id as string),
+    pressBoxId: show.body.listeningPoints.find((l: any) => l.name === "Press box")?.id ?? show.body.listeningPoints[0].id,
+    otherProgramId,
+    otherShowId: otherShows.body.shows[0]?.id as string,
+    director,
+    other,
+  };
+}
+
+/** A unique e-mail for accounts a test creates. */
+export function uniqueEmail(tag: string) {
+  return `${tag}-${Date.now()}-${Math.random().toString(36).slice(2, 8)}@test.example`;
+}
