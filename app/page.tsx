@@ -1,0 +1,8 @@
+import { redirect } from "next/navigation";
+import { currentUserOrNull } from "@/components/require-session";
+
+/** The front door: your programs when signed in, else the sign-in page. */
+export default async function Home() {
+  const user = await currentUserOrNull();
+  redirect(user ? "/programs" : "/sign-in");
+}
