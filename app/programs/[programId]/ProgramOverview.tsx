@@ -1,0 +1,103 @@
+"use client";
+// A program: its shows (links to their overviews) and its members with their roles.
+import Link from "next/link";
+import type { ProgramResponse, ShowsResponse } from "@/components/api-types";
+import { Breadcrumbs } from "@/components/Breadcrumbs";
+import { Card } from "@/components/Card";
+import { EmptyState } from "@/components/EmptyState";
+import { ErrorState } from "@/components/ErrorState";
+import { PageTitle } from "@/components/PageTitle";
+import { RoleBadge, ROLE_WORDS } from "@/components/RoleBadge";
+import { SkeletonBar, SkeletonCard } from "@/components/Skeleton";
+import { apiKeys, useApi, type ApiState } from "@/components/use-api";
+
+export function ProgramOverview({ programId }: { programId: string }) {
+  const program = useApi<ProgramResponse>(apiKeys.program(programId));
+  const shows = useApi<ShowsResponse>(apiKeys.programShows(programId));
+
+  if (program.error) {
+    return (
+      <>
+        <Breadcrumbs items={[{ label: "Programs", href: "/programs" }, { label: "Program" }]} />
+        <ErrorState error={program.error} what="program" onRetry={() => program.mutate()} />
+      </>
+    );
+  }
+  const name = program.data?.program.name;
+  return (
+    <>
+      <Breadcrumbs items={[{ label: "Programs", href: "/programs" }, { label: name ?? "Program" }]} />
+      {program.data ? (
+        <PageTitle
+          sub={
+            <span className="flex items-center gap-2">
+              Your role <RoleBadge role={program.data.role} />
+            </span>
+          }
+        >
+          {name}
+        </PageTitle>
+      ) : (
+        <div className="mb-6" role="status">
+          <span className="sr-only">Loading the program…</span>
+          <SkeletonBar className="h-9 w-2/3" />
+        </div>
+      )}
+      <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
+        <ShowsCard shows={shows} />
+        <MembersCard program={program} />
+      </div>
+    </>
+  );
+}
+
+function ShowsCard({ shows }: { shows: ApiState<ShowsResponse> }) {
+  if (shows.error) return <ErrorState error={shows.error} what="program" onRetry={() => shows.mutate()} />;
+  if (!shows.data) return <SkeletonCard rows={2} label="Loading shows…" />;
+  return (
+    <Card title="Shows" titleId="shows-title">
+      {shows.data.shows.length === 0 ? (
+        <EmptyState title="No shows yet">A show appears here once it is created for this program.</EmptyState>
+      ) : (
+        <ul className="space-y-3">
+          {shows.data.shows.map((s) => (
+            <li key={s.id}>
+              <Link
+                href={`/shows/${s.id}`}
+                className="flex min-h-14 items-center justify-between gap-3 rounded-lg border border-ink/15 bg-paper px-4 py-3 text-lg font-semibold text-ink hover:border-turf hover:bg-turf-light/40"
+              >
+                {s.name}
+                <span aria-hidden="true" className="text-turf-dark">
+                  →
+                </span>
+              </Link>
+            </li>
+          ))}
+        </ul>
+      )}
+    </Card>
+  );
+}
+
+function MembersCard({ program }: { program: ApiState<ProgramResponse> }) {
+  if (!program.data) return <SkeletonCard rows={3} label="Loading members…" />;
+  const { members } = program.data;
+  return (
+    <Card title={`Members (${members.length})`} titleId="members-title">
+      <ul className="divide-y divide-ink/10">
+        {members.map((m) => (
+          <li key={m.userId} className="flex min-h-14 flex-wrap items-center justify-between gap-2 py-2">
+            <span>
+              <span className="block font-semibold text-ink">{m.name}</span>
+              <span className="block break-all text-sm text-ink-soft">{m.email}</span>
+            </span>
+            <RoleBadge role={m.role} />
+          </li>
+        ))}
+      </ul>
+      <p className="mt-3 text-sm text-ink-soft">
+        {ROLE_WORDS.director}s manage members; {ROLE_WORDS.designer.toLowerCase()}s build the drill; {ROLE_WORDS.staff.toLowerCase()} read every screen and change no drill.
+      </p>
+    </Card>
+  );
+}

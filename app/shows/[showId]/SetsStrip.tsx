@@ -1,0 +1,36 @@
+// The show's sets in order, each a link to its page in the field editor, with its counts.
+import Link from "next/link";
+import type { SetSummary } from "@/components/api-types";
+import { EmptyState } from "@/components/EmptyState";
+import { plural } from "@/components/format";
+
+export function SetsStrip({ showId, sets }: { showId: string; sets: SetSummary[] }) {
+  if (sets.length === 0) return <EmptyState title="No sets yet">The drill designer adds sets in the field editor.</EmptyState>;
+  // The count at which each set is reached, from the start of the show.
+  let running = 0;
+  const rows = sets.map((s) => ({ ...s, at: (running += s.counts) }));
+  return (
+    <div>
+      <ol className="flex snap-x gap-3 overflow-x-auto pb-3" aria-label="Sets in order">
+        {rows.map((s) => (
+          <li key={s.id} className="snap-start">
+            <Link
+              href={`/shows/${showId}/sets/${s.id}`}
+              className="flex min-h-20 w-28 flex-col justify-between rounded-lg border border-ink/15 bg-paper px-3 py-2 hover:border-turf hover:bg-turf-light/40"
+            >
+              <span className="text-xl font-bold text-ink">
+                <span className="sr-only">Set </span>
+                {s.number}
+              </span>
+              <span className="text-sm text-ink-soft">{s.counts === 0 ? "opening" : plural(s.counts, "count")}</span>
+              <span className="text-xs text-ink-faint">at count {s.at}</span>
+            </Link>
+          </li>
+        ))}
+      </ol>
+      <p className="text-sm text-ink-soft">
+        {plural(sets.length, "set")}, {plural(running, "count")} in all. Counts are from the previous set. Open a set to place performers and hear its box mix.
+      </p>
+    </div>
+  );
+}
