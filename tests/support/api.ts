@@ -18,6 +18,8 @@ export interface ApiAnswer<T = any> {
 export class Client {
   cookie: string | null = null;
 
+  constructor(readonly base: string = APP_URL) {}
+
   async call<T = any>(method: string, path: string, body?: unknown, init: { headers?: Record<string, string>; raw?: string } = {}): Promise<ApiAnswer<T>> {
     const headers: Record<string, string> = { ...(init.headers ?? {}) };
     if (this.cookie) headers.cookie = this.cookie;
@@ -26,7 +28,7 @@ export class Client {
       payload = JSON.stringify(body);
       headers["content-type"] = "application/json";
     }
-    const res = await fetch(APP_URL + path, { method, headers, body: payload, redirect: "manual" });
+    const res = await fetch(this.base + path, { method, headers, body: payload, redirect: "manual" });
     const setCookie = res.headers.get("set-cookie");
     if (setCookie) {
       const pair = setCookie.split(";")[0]!;
@@ -51,8 +53,8 @@ export class Client {
   }
 }
 
-export async function signedIn(email: string, password = DEMO_PASSWORD): Promise<Client> {
-  const c = new Client();
+export async function signedIn(email: string, password = DEMO_PASSWORD, base = APP_URL): Promise<Client> {
+  const c = new Client(base);
   const res = await c.post("/api/auth/sign-in", { email, password });
   if (res.status !== 200) throw new Error(`sign-in as ${email} answered ${res.status}: ${JSON.stringify(res.body)}`);
   return c;

@@ -1,0 +1,74 @@
+// Database outage, app restarts and two app processes on one database, each on a private cluster.
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { Client, uniqueEmail } from "../support/api";
+import { createCluster, startApp, type App, type Cluster } from "../support/stack";
+
+let cluster: Cluster;
+let a: App;
+let b: App;
+let client: Client;
+
+beforeAll(async () => {
+  cluster = await createCluster("faults");
+  [a, b] = await Promise.all([startApp(cluster.url), startApp(cluster.url)]);
+  client = new Client(a.url);
+  const res = await client.post("/api/auth/sign-up", { name: "Fault Check", email: uniqueEmail("faults"), password: "fault-check-pass", programName: "Fault Band" });
+  expect(res.status).toBe(201);
+}, 120_000);
+
+afterAll(async () => {
+  await Promise.all([a?.stop(), b?.stop()]);
+  cluster?.remove();
+});
+
+describe("two app processes on one database", () => {
+  it("a session made on one is valid on the other", async () => {
+    const onB = new Client(b.url);
+    onB.cookie = client.cookie;
+    const me = await onB.get("/api/me");
+    expect(me.status).toBe(200);
+    expect(me.body.memberships[0].programName).toBe("Fault Band");
+  });
+
+  it("sign-in limits are shared: failures on one process lock the account on the other", async () => {
+    const email = uniqueEmail("shared-limit");
+    await new Client(a.url).post("/api/auth/sign-up", { name: "Limit", email, password: "right-password-1", programName: "Limit Band" });
+    for (let i = 0; i < 8; i++) await new Client(i % 2 ? a.url : b.url).post("/api/auth/sign-in", { email, password: `wrong-${i}` });
+    expect((await new Client(b.url).post("/api/auth/sign-in", { email, password: "right-password-1" })).status).toBe(429);
+  });
+});
+
+describe("database outage", () => {
+  it("answers 503 JSON within 2 s while PostgreSQL is down, and recovers without a restart", async () => {
+    cluster.stop();
+    try {
+      for (const path of ["/api/me", "/api/health"]) {
+        const started = Date.now();
+        const res = await client.get(path);
+        expect(Date.now() - started, path).toBeLessThan(2000);
+        expect(res.status, path).toBe(503);
+        expect(res.headers.get("content-type"), path).toContain("application/json");
+        expect(typeof res.body.error, path).toBe("string");
+      }
+      const page = await fetch(`${a.url}/programs`, { headers: { cookie: client.cookie! } });
+      const html = await page.text();
+      expect(html).toContain("database cannot be reached");
+    } finally {
+      cluster.start();
+    }
+    let status = 0;
+    for (let i = 0; i < 20 && status !== 200; i++) {
+      status = (await client.get("/api/me")).status;
+      if (status !== 200) await new Promise((r) => setTimeout(r, 250));
+    }
+    expect(status).toBe(200);
+  });
+
+  it("restarting the app loses no session", async () => {
+    await a.stop();
+    a = await startApp(cluster.url);
+    const again = new Client(a.url);
+    again.cookie = client.cookie;
+    expect((await again.get("/api/me")).status).toBe(200);
+  });
+});
