@@ -1,6 +1,6 @@
 // The football field in the field frame (metres): origin on the front sideline at the 50-yard
 // line, x toward side 2, y toward the back sideline. Pure; shared by the editor, imports and sheets.
-import { HALF_LENGTH_M, WIDTH_M } from "@/lib/validation/positions";
+import { FIELD_MARGIN_M, HALF_LENGTH_M, WIDTH_M } from "@/lib/validation/positions";
 
 export type FieldRules = "high-school" | "college";
 
@@ -62,4 +62,10 @@ export function yardLines(): YardLine[] {
 /** Snaps a coordinate to the step grid (multiples of a step from the 50 and from the front sideline). */
 export function snapToStep(v: number): number {
   return Math.round(v / STEP_M) * STEP_M;
+}
+
+/** Brings a point inside the area the API accepts (at most FIELD_MARGIN_M beyond a sideline or end line). */
+export function clampToFieldArea(x: number, y: number): { x: number; y: number } {
+  const maxX = END_LINE_X_M + FIELD_MARGIN_M;
+  return { x: Math.min(maxX, Math.max(-maxX, x)), y: Math.min(FIELD_WIDTH_M + FIELD_MARGIN_M, Math.max(-FIELD_MARGIN_M, y)) };
 }
