@@ -1,0 +1,77 @@
+// The shape of the demo data, as plain objects the loader turns into rows.
+import type { Conditions, Dynamic, VoiceOrTacet } from "@/lib/acoustics/types";
+import type { Role } from "@/db/schema";
+
+export interface DemoMember {
+  email: string;
+  name: string;
+  role: Role;
+}
+
+export interface DemoPerformer {
+  label: string;
+  /** A key of the instrument catalog (lib/acoustics DEFAULT_INSTRUMENTS). */
+  instrument: string;
+  section: string;
+  part: string;
+  strengthDb: number;
+  name?: string;
+}
+
+export interface DemoPosition {
+  x: number;
+  y: number;
+  facingDeg: number;
+}
+
+export interface DemoSet {
+  number: string;
+  /** Counts from the previous set (0 for the opening set). */
+  counts: number;
+  movement: number;
+  /** Every performer's dot, by label. */
+  positions: Record<string, DemoPosition>;
+}
+
+export interface DemoVoice {
+  voice: VoiceOrTacet;
+  dynamic: Dynamic;
+}
+
+export interface DemoOverride extends DemoVoice {
+  label: string;
+  note: string;
+}
+
+export interface DemoPhrase {
+  name: string;
+  firstSet: string;
+  lastSet: string;
+  /** Every section's voice and written dynamic. */
+  sections: Record<string, DemoVoice>;
+  overrides: DemoOverride[];
+}
+
+export interface DemoListeningPoint {
+  name: string;
+  x: number;
+  y: number;
+  z: number;
+}
+
+export interface DemoShow {
+  name: string;
+  fieldRules: "high-school" | "college";
+  conditions: Conditions;
+  listeningPoints: DemoListeningPoint[];
+  performers: DemoPerformer[];
+  movements: { number: number; name: string }[];
+  sets: DemoSet[];
+  phrases: DemoPhrase[];
+}
+
+export interface DemoProgram {
+  name: string;
+  members: DemoMember[];
+  shows: DemoShow[];
+}
