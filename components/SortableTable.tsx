@@ -63,7 +63,7 @@ export function SortableTable<T>({ caption, columns, rows, rowKey, initialSort }
           {sorted.map((row) => (
             <tr key={rowKey(row)} className="border-t border-ink/10 odd:bg-paper-raised even:bg-paper">
               {columns.map((c) => (
-                <td key={c.key} className={`px-3 py-2.5 ${c.align === "right" ? "text-right tabular-nums" : ""}`}>
+                <td key={c.key} className={`whitespace-nowrap px-3 py-2.5 ${c.align === "right" ? "text-right tabular-nums" : ""}`}>
                   {c.render ? c.render(row) : c.sortValue(row)}
                 </td>
               ))}

@@ -16,7 +16,7 @@ export default async function SignUpPage({ searchParams }: PageProps<"/sign-up">
   return (
     <AuthFrame
       title="Create an account"
-      intro="You become the director of a new program. Invite your designer and staff from there."
+      intro="You become the director of a new band program, with a workspace of its own."
       footer={
         <>
           Already have an account?{" "}

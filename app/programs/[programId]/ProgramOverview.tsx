@@ -43,7 +43,7 @@ export function ProgramOverview({ programId }: { programId: string }) {
           <SkeletonBar className="h-9 w-2/3" />
         </div>
       )}
-      <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
+      <div className="grid items-start gap-6 lg:grid-cols-[3fr_2fr]">
         <ShowsCard shows={shows} />
         <MembersCard program={program} />
       </div>

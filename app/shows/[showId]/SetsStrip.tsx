@@ -11,12 +11,12 @@ export function SetsStrip({ showId, sets }: { showId: string; sets: SetSummary[]
   const rows = sets.map((s) => ({ ...s, at: (running += s.counts) }));
   return (
     <div>
-      <ol className="flex snap-x gap-3 overflow-x-auto pb-3" aria-label="Sets in order">
+      <ol className="mb-3 grid grid-cols-[repeat(auto-fill,minmax(5.75rem,1fr))] gap-3" aria-label="Sets in order">
         {rows.map((s) => (
-          <li key={s.id} className="snap-start">
+          <li key={s.id}>
             <Link
               href={`/shows/${showId}/sets/${s.id}`}
-              className="flex min-h-20 w-28 flex-col justify-between rounded-lg border border-ink/15 bg-paper px-3 py-2 hover:border-turf hover:bg-turf-light/40"
+              className="relative flex min-h-20 flex-col justify-between rounded-lg border border-ink/15 bg-paper px-3 py-2 hover:border-turf hover:bg-turf-light/40"
             >
               <span className="text-xl font-bold text-ink">
                 <span className="sr-only">Set </span>

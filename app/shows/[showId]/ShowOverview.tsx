@@ -55,7 +55,7 @@ export function ShowOverview({ showId }: { showId: string }) {
         <Card title="Sets" titleId="sets-title">
           <SetsStrip showId={s.id} sets={sets} />
         </Card>
-        <div className="grid gap-6 lg:grid-cols-2">
+        <div className="grid items-start gap-6 md:grid-cols-2">
           <Card title="Listening points" titleId="points-title">
             <ListeningPoints points={listeningPoints} />
           </Card>
@@ -80,7 +80,7 @@ function ShowSkeleton() {
         <SkeletonBar className="h-9 w-2/3" />
       </div>
       <SkeletonCard rows={1} label="Loading sets…" />
-      <div className="grid gap-6 lg:grid-cols-2">
+      <div className="grid items-start gap-6 md:grid-cols-2">
         <SkeletonCard rows={2} label="Loading listening points…" />
         <SkeletonCard rows={4} label="Loading conditions…" />
       </div>
