@@ -1,0 +1,87 @@
+import { describe, expect, it } from "vitest";
+import { analyzeSet, hearingMap, type AnalysisInput, type PerformerInput } from "@/lib/acoustics";
+import { AIR, performer } from "./helpers";
+
+const drum = (over: Partial<PerformerInput> = {}): PerformerInput =>
+  performer({ id: "BD", instrument: "bass-drum", section: "bass drums", voice: "percussion", dynamic: "ff", x: 0, y: 20, facingDeg: 0, ...over });
+const listener = (id: string, x: number, y = 20): PerformerInput => performer({ id, instrument: "trumpet", section: "trumpets", voice: "tacet", x, y, facingDeg: 0 });
+const set = (performers: PerformerInput[]): AnalysisInput => ({ performers, listeningPoints: [], conditions: AIR });
+const byId = (m: ReturnType<typeof hearingMap>, id: string) => m.performers.find((p) => p.id === id)!;
+
+describe("hearing map: levels at the ears", () => {
+  // Near T1 (one step and a bit, 1.2 m to the side) and far T2 (20 m to the side), both tacet.
+  const map = hearingMap(set([drum(), listener("T1", 1.2), listener("T2", 20)]), { rehearsalMinutes: 120 });
+
+  it("makes a performer next to a bass drum more exposed than one 20 m away", () => {
+    expect(byId(map, "T1").dbA).toBeGreaterThan(byId(map, "T2").dbA + 20);
+    expect(byId(map, "T1").loudestSourceId).toBe("BD");
+    expect(byId(map, "T1").exposure.niosh.dose).toBeGreaterThan(byId(map, "T2").exposure.niosh.dose);
+  });
+
+  it("falls off with the inverse-square law between them (−20·lg(r2/r1); Everest & Pohlmann, Master Handbook of Acoustics, ch. 3), air and directivity aside", () => {
+    // 3-D distances from the drum (source 1.5 m) to ears at 1.6 m.
+    const r1 = Math.hypot(1.2, 0.1);
+    const r2 = Math.hypot(20, 0.1);
+    const drop = byId(map, "T1").dbA - byId(map, "T2").dbA;
+    expect(Math.abs(drop - 20 * Math.log10(r2 / r1))).toBeLessThan(1.5);
+  });
+
+  it("agrees with the box mix engine: the level at a performer's ears is the mix at a point at ear height there", () => {
+    const input = set([drum(), listener("T1", 3), drum({ id: "BD2", x: -4, y: 25, dynamic: "f" })]);
+    const direct = analyzeSet({ ...input, listeningPoints: [{ id: "ears", x: 3, y: 20, z: 1.6 }] }).points[0]!;
+    const t1 = byId(hearingMap(input, { rehearsalMinutes: 60 }), "T1");
+    expect(t1.dbA).toBeCloseTo(direct.totalDbA, 9); // T1 is tacet, so everyone else is the whole mix
+  });
+
+  it("does not count the player's own instrument, and counts a neighbour a step away as 1 m, never infinite", () => {
+    const alone = hearingMap(set([drum()]), { rehearsalMinutes: 60 });
+    expect(byId(alone, "BD").dbA).toBe(-Infinity);
+    expect(byId(alone, "BD").exposure.niosh.dose).toBe(0);
+    const touching = byId(hearingMap(set([drum(), listener("T1", 0.2)]), { rehearsalMinutes: 60 }), "T1").dbA;
+    const atOneMetre = byId(hearingMap(set([drum(), listener("T1", Math.sqrt(1 - 0.01))]), { rehearsalMinutes: 60 }), "T1").dbA;
+    expect(Number.isFinite(touching)).toBe(true);
+    expect(Math.abs(touching - atOneMetre)).toBeLessThan(0.2); // only the angle and the ground path differ
+  });
+
+  it("sums every other performer energetically: two equal drums mirrored about a player add 3 dB (Davis & Patronis, Sound System Engineering §2.15)", () => {
+    const one = byId(hearingMap(set([drum({ x: -5 }), listener("T1", 0)]), { rehearsalMinutes: 60 }), "T1").dbA;
+    const two = byId(hearingMap(set([drum({ x: -5 }), drum({ id: "BD2", x: 5 }), listener("T1", 0)]), { rehearsalMinutes: 60 }), "T1").dbA;
+    expect(two - one).toBeCloseTo(10 * Math.log10(2), 6);
+  });
+});
+
+describe("hearing map: dose of a rehearsal", () => {
+  // Tune the drum's strength so T1 hears exactly a target level; a single source moves dB for dB.
+  function atLevel(target: number, minutes: number) {
+    const base = byId(hearingMap(set([drum(), listener("T1", 6)]), { rehearsalMinutes: minutes }), "T1").dbA;
+    const map = hearingMap(set([drum({ strengthDb: target - base }), listener("T1", 6)]), { rehearsalMinutes: minutes });
+    return byId(map, "T1");
+  }
+
+  it("NIOSH 98-126 (85 dBA, 8 h, 3 dB exchange): 94 dBA for 1 h is a full daily dose; 100 dBA allows 15 min (from memory of the published table)", () => {
+    const t = atLevel(94, 60);
+    expect(t.dbA).toBeCloseTo(94, 9);
+    expect(t.exposure.niosh.dose).toBeCloseTo(1, 9);
+    expect(t.exposure.niosh.limitMinutes).toBeCloseTo(60, 9);
+    expect(atLevel(100, 60).exposure.niosh.limitMinutes).toBeCloseTo(15, 9);
+  });
+
+  it("OSHA 29 CFR 1910.95 Table G-16 (90 dBA, 8 h, 5 dB exchange): 100 dBA for 2 h is a full dose, 95 dBA allows 4 h (from memory)", () => {
+    const t = atLevel(100, 120);
+    expect(t.exposure.osha.dose).toBeCloseTo(1, 9);
+    expect(t.exposure.niosh.dose).toBeCloseTo(8, 9); // 120 min against NIOSH's 15
+    expect(atLevel(95, 60).exposure.osha.limitMinutes).toBeCloseTo(240, 9);
+  });
+
+  it("scales the dose with the rehearsal's length", () => {
+    expect(atLevel(97, 90).exposure.niosh.dose).toBeCloseTo(3 * atLevel(97, 30).exposure.niosh.dose, 9);
+  });
+
+  it("rejects bad options with the field named", () => {
+    const input = set([drum(), listener("T1", 3)]);
+    expect(() => hearingMap(input, { rehearsalMinutes: -5 })).toThrow(/rehearsalMinutes/);
+    expect(() => hearingMap(input, { rehearsalMinutes: Number.NaN })).toThrow(/rehearsalMinutes/);
+    expect(() => hearingMap(input, { rehearsalMinutes: 60, minDistanceM: 0.1 })).toThrow(/minDistanceM/);
+    expect(() => hearingMap(set([{ ...drum(), x: Number.NaN }]), { rehearsalMinutes: 60 })).toThrow(/performers\[0\]\.x/);
+  });
+});
