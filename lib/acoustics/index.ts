@@ -21,3 +21,6 @@ export { analyzeSet } from "./analyze";
 export { positionsAtCount, positionsBetweenInto, facingBetweenDeg, transitionFraction, normalizeDeg } from "./transition";
 export { exposureLimitMinutes, dailyDose, type ExposureStandard } from "./exposure";
 export { toJsonSafe, type JsonSafe } from "./json";
+export { cWeightingDb } from "./c-weighting";
+export { fitCarryOffsets, applyCarryOffsets, type BoxReading, type FitCarryOptions, type CarryFit, type Determination } from "./calibration";
+export { hearingMap, EAR_HEIGHT_M, HEARING_MIN_DISTANCE_M, type HearingOptions, type HearingMap, type PerformerHearing, type ExposureAt } from "./hearing";
