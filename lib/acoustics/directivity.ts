@@ -47,14 +47,14 @@ export function compileDirectivity(directivity: InstrumentSpec["directivity"], f
   return { angles: Float64Array.from(angles), values, n };
 }
 
-/** Writes the directivity (dB) of every band at angleDeg (0…180) into out[0..7]. */
+/** Writes the directivity (dB) of every band at angleDeg (0…180) into out (one slot per band). */
 export function directivityInto(out: Float64Array, d: CompiledDirectivity, angleDeg: number): void {
   const n = d.n;
   let i = 0;
   while (i < n - 2 && angleDeg > d.angles[i + 1]) i++;
   const t = (angleDeg - d.angles[i]) / (d.angles[i + 1] - d.angles[i]);
   const v = d.values;
-  for (let b = 0, k = i; b < BAND_COUNT; b++, k += n) out[b] = v[k] + (v[k + 1] - v[k]) * t;
+  for (let b = 0, k = i; b < out.length; b++, k += n) out[b] = v[k] + (v[k + 1] - v[k]) * t;
 }
 
 /**

@@ -22,6 +22,15 @@ import {
   type Voice,
 } from "./types";
 
+// Module-local copies of imported bindings used in the hot loop: when the code runs as CommonJS
+// (tsx, Node) every imported name is read through a getter, which costs more than the arithmetic.
+const B = BAND_COUNT;
+const V = VOICES.length;
+const TERMS = GROUND_TERM_COUNT;
+const directivityAt = directivityInto;
+const angleOf = angleFromFacingDeg;
+const groundAt = groundBandsInto;
+
 /** Closer than this the point-source model does not hold; distances are clamped to it. */
 export const MIN_DISTANCE_M = 0.5;
 
@@ -60,6 +69,40 @@ export interface SetEvaluator {
   result(): AnalysisResult;
 }
 
+/** Everything evaluate() reads: built once per set, one object shape for every evaluator. */
+interface EvaluatorState {
+  P: number;
+  N: number;
+  S: number;
+  g: number | null;
+  msPerM: number;
+  alphaDbPerM: Float64Array;
+  base: Float64Array; // Lw + carry + strength per performer and band
+  z: Float64Array;
+  srcTerms: Float64Array;
+  rcvTerms: Float64Array;
+  sectionOf: Int32Array;
+  voiceOf: Int32Array; // -1 for tacet
+  dirOf: CompiledDirectivity[];
+  x: Float64Array;
+  y: Float64Array;
+  facingDeg: Float64Array;
+  lx: Float64Array;
+  ly: Float64Array;
+  lz: Float64Array;
+  perfDb: Float64Array; // per point, performer and band
+  perfEA: Float64Array; // A-weighted energy per point and performer
+  arrivalMs: Float64Array;
+  sectionE: Float64Array;
+  voiceE: Float64Array;
+  totalE: Float64Array;
+  fx: Float64Array;
+  fy: Float64Array;
+  dirDb: Float64Array;
+  grDb: Float64Array;
+  mix: MixBuffers;
+}
+
 /** Validates an analysis input and prepares an evaluator for it. */
 export function createSetEvaluator(input: AnalysisInput): SetEvaluator {
   if (input === null || typeof input !== "object") throw new AcousticsInputError("input", "must be an object");
@@ -72,27 +115,22 @@ export function createSetEvaluator(input: AnalysisInput): SetEvaluator {
 
   const P = performers.length;
   const N = points.length;
-  const B = BAND_COUNT;
-  const V = VOICES.length;
-  const g = conditions.groundFactor;
-  const msPerM = 1000 / speedOfSound(conditions.temperatureC);
-  const alphaDbPerM = Float64Array.from(OCTAVE_BANDS, (b) => absorptionDbPerKmUnchecked(b.exactHz, conditions) / 1000);
 
   // Per instrument: checked once, directivity flattened; per instrument and dynamic: band powers.
   const directivities = new Map<string, CompiledDirectivity>();
-  const bandCache = new Map<string, Float64Array>();
+  const bandCache = new Map<string, Map<string, Float64Array>>();
   const sectionIndex = new Map<string, number>();
   const sectionNames: string[] = [];
-  const base = new Float64Array(P * B); // Lw + carry + strength per performer and band
+  const indexById = new Map<string, number>();
+  const base = new Float64Array(P * B);
   const z = new Float64Array(P);
   const srcTerms = new Float64Array(P * GROUND_TERM_COUNT);
   const sectionOf = new Int32Array(P);
-  const voiceOf = new Int32Array(P); // -1 for tacet
+  const voiceOf = new Int32Array(P);
   const dirOf: CompiledDirectivity[] = new Array(P);
   const x = new Float64Array(P);
   const y = new Float64Array(P);
   const facingDeg = new Float64Array(P);
-  const indexById = new Map<string, number>();
 
   for (let p = 0; p < P; p++) {
     const perf = performers[p];
@@ -104,12 +142,13 @@ export function createSetEvaluator(input: AnalysisInput): SetEvaluator {
       directivities.set(perf.instrument, dir);
     }
     dirOf[p] = dir;
-    const key = `${perf.instrument}\u0000${perf.dynamic}`;
-    let bands = bandCache.get(key);
+    let byDynamic = bandCache.get(perf.instrument);
+    if (!byDynamic) bandCache.set(perf.instrument, (byDynamic = new Map()));
+    let bands = byDynamic.get(perf.dynamic);
     if (!bands) {
       bands = new Float64Array(B);
       instrumentBandsInto(spec, perf.dynamic, bands);
-      bandCache.set(key, bands);
+      byDynamic.set(perf.dynamic, bands);
     }
     const offset = spec.carryDb + (perf.strengthDb ?? 0);
     for (let b = 0; b < B; b++) base[p * B + b] = bands[b] + offset;
@@ -122,7 +161,8 @@ export function createSetEvaluator(input: AnalysisInput): SetEvaluator {
     sectionOf[p] = s;
     voiceOf[p] = perf.voice === "tacet" ? -1 : VOICES.indexOf(perf.voice);
     z[p] = perf.z ?? DEFAULT_SOURCE_HEIGHT_M;
-    regionTermsInto(z[p], srcTerms, p * GROUND_TERM_COUNT);
+    if (p > 0 && z[p] === z[p - 1]) srcTerms.copyWithin(p * TERMS, (p - 1) * TERMS, p * TERMS); // same height, same terms
+    else regionTermsInto(z[p], srcTerms, p * TERMS);
     x[p] = perf.x;
     y[p] = perf.y;
     facingDeg[p] = perf.facingDeg;
@@ -132,127 +172,44 @@ export function createSetEvaluator(input: AnalysisInput): SetEvaluator {
   const S = sectionNames.length;
   const rcvTerms = new Float64Array(N * GROUND_TERM_COUNT);
   points.forEach((pt, i) => regionTermsInto(pt.z, rcvTerms, i * GROUND_TERM_COUNT));
-  const lx = Float64Array.from(points, (pt) => pt.x);
-  const ly = Float64Array.from(points, (pt) => pt.y);
-  const lz = Float64Array.from(points, (pt) => pt.z);
-
-  // Outputs of the hot loop.
-  const perfDb = new Float64Array(N * P * B);
-  const arrivalMs = new Float64Array(N * P);
-  const sectionE = new Float64Array(N * S * B);
-  const voiceE = new Float64Array(N * V * B);
-  const totalE = new Float64Array(N * B);
-  const mix: MixBuffers = {
-    sectionNames,
-    totalDbA: new Float64Array(N),
-    voiceDbA: new Float64Array(N * V),
-    sectionDbA: new Float64Array(N * S),
-    arrivalSpreadMs: new Float64Array(N),
+  const st: EvaluatorState = {
+    P,
+    N,
+    S,
+    g: conditions.groundFactor,
+    msPerM: 1000 / speedOfSound(conditions.temperatureC),
+    alphaDbPerM: Float64Array.from(OCTAVE_BANDS, (b) => absorptionDbPerKmUnchecked(b.exactHz, conditions) / 1000),
+    base,
+    z,
+    srcTerms,
+    rcvTerms,
+    sectionOf,
+    voiceOf,
+    dirOf,
+    x,
+    y,
+    facingDeg,
+    lx: Float64Array.from(points, (pt) => pt.x),
+    ly: Float64Array.from(points, (pt) => pt.y),
+    lz: Float64Array.from(points, (pt) => pt.z),
+    perfDb: new Float64Array(N * P * B).fill(-Infinity), // tacet performers stay at -Infinity
+    perfEA: new Float64Array(N * P),
+    arrivalMs: new Float64Array(N * P),
+    sectionE: new Float64Array(N * S * B),
+    voiceE: new Float64Array(N * V * B),
+    totalE: new Float64Array(N * B),
+    fx: new Float64Array(P),
+    fy: new Float64Array(P),
+    dirDb: new Float64Array(B),
+    grDb: new Float64Array(B),
+    mix: {
+      sectionNames,
+      totalDbA: new Float64Array(N),
+      voiceDbA: new Float64Array(N * V),
+      sectionDbA: new Float64Array(N * S),
+      arrivalSpreadMs: new Float64Array(N),
+    },
   };
-  // Scratch, reused by every pair.
-  const fx = new Float64Array(P);
-  const fy = new Float64Array(P);
-  const dirDb = new Float64Array(B);
-  const grDb = new Float64Array(B);
-  perfDb.fill(-Infinity); // tacet performers stay at -Infinity
-
-  function weightedDb(energy: Float64Array, offset: number): number {
-    let e = 0;
-    for (let b = 0; b < B; b++) e += energy[offset + b] * A_WEIGHT_ENERGY[b];
-    return 10 * Math.log10(e);
-  }
-
-  function evaluate(): MixBuffers {
-    for (let p = 0; p < P; p++) {
-      if (!Number.isFinite(x[p]) || !Number.isFinite(y[p]) || !Number.isFinite(facingDeg[p])) {
-        const field = !Number.isFinite(x[p]) ? "x" : !Number.isFinite(y[p]) ? "y" : "facingDeg";
-        throw new AcousticsInputError(`positions[${p}].${field}`, "must be a finite number");
-      }
-      const a = facingDeg[p] * DEG_TO_RAD;
-      fx[p] = Math.sin(a);
-      fy[p] = -Math.cos(a);
-    }
-    sectionE.fill(0);
-    voiceE.fill(0);
-    totalE.fill(0);
-    for (let n = 0; n < N; n++) {
-      let minMs = Infinity;
-      let maxMs = -Infinity;
-      const rOff = n * GROUND_TERM_COUNT;
-      for (let p = 0; p < P; p++) {
-        const dx = lx[n] - x[p];
-        const dy = ly[n] - y[p];
-        const dz = lz[n] - z[p];
-        const dp = Math.sqrt(dx * dx + dy * dy);
-        let r = Math.sqrt(dp * dp + dz * dz);
-        if (r < MIN_DISTANCE_M) r = MIN_DISTANCE_M;
-        const ms = r * msPerM;
-        arrivalMs[n * P + p] = ms;
-        const v = voiceOf[p];
-        if (v < 0) continue;
-        if (ms < minMs) minMs = ms;
-        if (ms > maxMs) maxMs = ms;
-        directivityInto(dirDb, dirOf[p], angleFromFacingDeg(fx[p], fy[p], dx, dy, r));
-        if (g === null) grDb.fill(0);
-        else groundBandsInto(grDb, g, srcTerms, p * GROUND_TERM_COUNT, rcvTerms, rOff, z[p] + lz[n], dp);
-        const common = -(20 * Math.log10(r) + 11); // ISO 9613-2 eq. (7)
-        const pOff = (n * P + p) * B;
-        const sOff = (n * S + sectionOf[p]) * B;
-        const vOff = (n * V + v) * B;
-        const tOff = n * B;
-        for (let b = 0; b < B; b++) {
-          const level = base[p * B + b] + dirDb[b] + common - alphaDbPerM[b] * r - grDb[b];
-          perfDb[pOff + b] = level;
-          const e = Math.exp(level * DB_TO_LN);
-          sectionE[sOff + b] += e;
-          voiceE[vOff + b] += e;
-          totalE[tOff + b] += e;
-        }
-      }
-      mix.arrivalSpreadMs[n] = maxMs >= minMs ? maxMs - minMs : 0;
-      mix.totalDbA[n] = weightedDb(totalE, n * B);
-      for (let v = 0; v < V; v++) mix.voiceDbA[n * V + v] = weightedDb(voiceE, (n * V + v) * B);
-      for (let s = 0; s < S; s++) mix.sectionDbA[n * S + s] = weightedDb(sectionE, (n * S + s) * B);
-    }
-    return mix;
-  }
-
-  function bandsDbOf(energy: Float64Array, offset: number): number[] {
-    const out = new Array<number>(B);
-    for (let b = 0; b < B; b++) out[b] = 10 * Math.log10(energy[offset + b]);
-    return out;
-  }
-
-  function result(): AnalysisResult {
-    const out: PointResult[] = [];
-    for (let n = 0; n < N; n++) {
-      const voices: Partial<Record<Voice, LevelSummary>> = {};
-      for (let v = 0; v < V; v++) {
-        const dbA = mix.voiceDbA[n * V + v];
-        if (dbA > -Infinity) voices[VOICES[v]] = { dbA, bandsDb: bandsDbOf(voiceE, (n * V + v) * B) };
-      }
-      const sections: Record<string, LevelSummary> = {};
-      for (let s = 0; s < S; s++) {
-        sections[sectionNames[s]] = { dbA: mix.sectionDbA[n * S + s], bandsDb: bandsDbOf(sectionE, (n * S + s) * B) };
-      }
-      const perfs = performers.map((perf, p) => {
-        const pOff = (n * P + p) * B;
-        const bandsDb = Array.from(perfDb.subarray(pOff, pOff + B));
-        let e = 0;
-        for (let b = 0; b < B; b++) e += Math.exp(bandsDb[b] * DB_TO_LN) * A_WEIGHT_ENERGY[b];
-        return { id: perf.id, dbA: 10 * Math.log10(e), bandsDb, arrivalMs: arrivalMs[n * P + p] };
-      });
-      out.push({
-        listeningPointId: points[n].id,
-        totalDbA: mix.totalDbA[n],
-        voices,
-        sections,
-        performers: perfs,
-        arrivalSpreadMs: mix.arrivalSpreadMs[n],
-      });
-    }
-    return { points: out };
-  }
 
   function setPositions(positions: readonly Position[]): void {
     if (!Array.isArray(positions)) throw new AcousticsInputError("positions", "must be an array");
@@ -273,10 +230,117 @@ export function createSetEvaluator(input: AnalysisInput): SetEvaluator {
     x,
     y,
     facingDeg,
-    mix,
+    mix: st.mix,
     indexOf: (id) => indexById.get(id) ?? -1,
     setPositions,
-    evaluate,
-    result,
+    evaluate: () => evaluateState(st),
+    result: () => resultOf(st, performers, points),
   };
+}
+
+function weightedDb(energy: Float64Array, offset: number): number {
+  let e = 0;
+  for (let b = 0; b < B; b++) e += energy[offset + b] * A_WEIGHT_ENERGY[b];
+  return 10 * Math.log10(e);
+}
+
+// A module-level function over one state shape (not a closure per evaluator), so the optimised
+// code is shared by every evaluator instead of being specialised to, and thrown away for, one.
+function evaluateState(st: EvaluatorState): MixBuffers {
+  const { P, N, S, g, msPerM, alphaDbPerM, base, z, srcTerms, rcvTerms, sectionOf, voiceOf, dirOf, x, y, facingDeg } = st;
+  const { lx, ly, lz, perfDb, perfEA, arrivalMs, sectionE, voiceE, totalE, fx, fy, dirDb, grDb, mix } = st;
+  for (let p = 0; p < P; p++) {
+    if (!Number.isFinite(x[p]) || !Number.isFinite(y[p]) || !Number.isFinite(facingDeg[p])) {
+      const field = !Number.isFinite(x[p]) ? "x" : !Number.isFinite(y[p]) ? "y" : "facingDeg";
+      throw new AcousticsInputError(`positions[${p}].${field}`, "must be a finite number");
+    }
+    const a = facingDeg[p] * DEG_TO_RAD;
+    fx[p] = Math.sin(a);
+    fy[p] = -Math.cos(a);
+  }
+  sectionE.fill(0);
+  voiceE.fill(0);
+  totalE.fill(0);
+  if (g === null) grDb.fill(0);
+  for (let n = 0; n < N; n++) {
+    let minMs = Infinity;
+    let maxMs = -Infinity;
+    const rOff = n * TERMS;
+    for (let p = 0; p < P; p++) {
+      const dx = lx[n] - x[p];
+      const dy = ly[n] - y[p];
+      const dz = lz[n] - z[p];
+      const dp = Math.sqrt(dx * dx + dy * dy);
+      let r = Math.sqrt(dp * dp + dz * dz);
+      if (r < MIN_DISTANCE_M) r = MIN_DISTANCE_M;
+      const ms = r * msPerM;
+      arrivalMs[n * P + p] = ms;
+      const v = voiceOf[p];
+      if (v < 0) continue;
+      if (ms < minMs) minMs = ms;
+      if (ms > maxMs) maxMs = ms;
+      directivityAt(dirDb, dirOf[p], angleOf(fx[p], fy[p], dx, dy, r));
+      if (g !== null) groundAt(grDb, g, srcTerms, p * TERMS, rcvTerms, rOff, z[p] + lz[n], dp);
+      const common = -(20 * Math.log10(r) + 11); // ISO 9613-2 eq. (7)
+      const pOff = (n * P + p) * B;
+      const sOff = (n * S + sectionOf[p]) * B;
+      const vOff = (n * V + v) * B;
+      const tOff = n * B;
+      let eA = 0;
+      for (let b = 0; b < B; b++) {
+        const level = base[p * B + b] + dirDb[b] + common - alphaDbPerM[b] * r - grDb[b];
+        perfDb[pOff + b] = level;
+        const e = Math.exp(level * DB_TO_LN);
+        eA += e * A_WEIGHT_ENERGY[b];
+        sectionE[sOff + b] += e;
+        voiceE[vOff + b] += e;
+        totalE[tOff + b] += e;
+      }
+      perfEA[n * P + p] = eA;
+    }
+    mix.arrivalSpreadMs[n] = maxMs >= minMs ? maxMs - minMs : 0;
+    mix.totalDbA[n] = weightedDb(totalE, n * B);
+    for (let v = 0; v < V; v++) mix.voiceDbA[n * V + v] = weightedDb(voiceE, (n * V + v) * B);
+    for (let s = 0; s < S; s++) mix.sectionDbA[n * S + s] = weightedDb(sectionE, (n * S + s) * B);
+  }
+  return mix;
+}
+
+function bandsDbOf(energy: Float64Array, offset: number): number[] {
+  const out = new Array<number>(B);
+  for (let b = 0; b < B; b++) out[b] = 10 * Math.log10(energy[offset + b]);
+  return out;
+}
+
+function resultOf(st: EvaluatorState, performers: AnalysisInput["performers"], points: AnalysisInput["listeningPoints"]): AnalysisResult {
+  const { P, N, S, mix, perfDb, perfEA, arrivalMs, voiceE, sectionE } = st;
+  const out: PointResult[] = [];
+  for (let n = 0; n < N; n++) {
+    const voices: Partial<Record<Voice, LevelSummary>> = {};
+    for (let v = 0; v < V; v++) {
+      const dbA = mix.voiceDbA[n * V + v];
+      if (dbA > -Infinity) voices[VOICES[v]] = { dbA, bandsDb: bandsDbOf(voiceE, (n * V + v) * B) };
+    }
+    const sections: Record<string, LevelSummary> = {};
+    for (let s = 0; s < S; s++) {
+      sections[mix.sectionNames[s]] = { dbA: mix.sectionDbA[n * S + s], bandsDb: bandsDbOf(sectionE, (n * S + s) * B) };
+    }
+    const perfs = new Array<PointResult["performers"][number]>(P);
+    for (let p = 0; p < P; p++) {
+      const pOff = (n * P + p) * B;
+      const bandsDb = new Array<number>(B);
+      for (let b = 0; b < B; b++) bandsDb[b] = perfDb[pOff + b];
+      const silent = st.voiceOf[p] < 0;
+      perfs[p] = { id: performers[p].id, dbA: silent ? -Infinity : 10 * Math.log10(perfEA[n * P + p]), bandsDb, arrivalMs: arrivalMs[n * P + p] };
+    }
+    out.push({
+      listeningPointId: points[n].id,
+      totalDbA: mix.totalDbA[n],
+      voices,
+      sections,
+      performers: perfs,
+      arrivalSpreadMs: mix.arrivalSpreadMs[n],
+    });
+  }
+  return { points: out };
 }

@@ -45,8 +45,10 @@ export function groundBandsInto(
   out[2] = -3 + g * (3 + (src[srcOffset + 2] + rcv[rcvOffset + 2]) * e1) + middle;
   out[3] = -3 + g * (3 + (src[srcOffset + 3] + rcv[rcvOffset + 3]) * e1) + middle;
   out[4] = -3 + g * (3 + (src[srcOffset + 4] + rcv[rcvOffset + 4]) * e1) + middle;
-  const high = -3 * (1 - g) + middle;
-  for (let b = 5; b < BAND_COUNT; b++) out[b] = high;
+  const high = -3 * (1 - g) + middle; // 2 kHz, 4 kHz, 8 kHz
+  out[5] = high;
+  out[6] = high;
+  out[7] = high;
 }
 
 export interface GroundQuery {

@@ -4,12 +4,15 @@ import type { Position } from "./types";
 
 /** An angle brought into [0, 360). */
 export function normalizeDeg(deg: number): number {
-  return ((deg % 360) + 360) % 360;
+  let d = deg % 360;
+  if (d < 0) d += 360;
+  return d >= 360 ? 0 : d; // −1e-20 + 360 rounds to 360
 }
 
 /** Facing (0…360) a fraction t of the way from a to b, turning the short way. */
 export function facingBetweenDeg(fromDeg: number, toDeg: number, t: number): number {
-  let turn = (((toDeg - fromDeg) % 360) + 540) % 360 - 180; // −180 … 180
+  let turn = toDeg - fromDeg;
+  turn -= 360 * Math.round(turn / 360); // −180 … 180
   if (turn === -180) turn = 180; // a half turn goes clockwise
   return normalizeDeg(fromDeg + turn * t);
 }
@@ -33,10 +36,13 @@ export function positionsBetweenInto(
   t: number,
   out: { x: Float64Array; y: Float64Array; facingDeg: Float64Array },
 ): void {
-  for (let i = 0; i < out.x.length; i++) {
-    out.x[i] = from.x[i] + (to.x[i] - from.x[i]) * t;
-    out.y[i] = from.y[i] + (to.y[i] - from.y[i]) * t;
-    out.facingDeg[i] = facingBetweenDeg(from.facingDeg[i], to.facingDeg[i], t);
+  const { x: ax, y: ay, facingDeg: af } = from;
+  const { x: bx, y: by, facingDeg: bf } = to;
+  const { x: ox, y: oy, facingDeg: of } = out;
+  for (let i = 0; i < ox.length; i++) {
+    ox[i] = ax[i] + (bx[i] - ax[i]) * t;
+    oy[i] = ay[i] + (by[i] - ay[i]) * t;
+    of[i] = facingBetweenDeg(af[i], bf[i], t);
   }
 }
 

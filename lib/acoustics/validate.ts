@@ -25,30 +25,37 @@ export function validateConditions(conditions: Conditions): void {
   if (conditions.groundFactor !== null) requireInRange(conditions.groundFactor, 0, 1, "conditions.groundFactor");
 }
 
+const VOICE_SET: ReadonlySet<string> = new Set<string>([...VOICES, "tacet"]);
+const DYNAMIC_SET: ReadonlySet<string> = new Set<string>(DYNAMICS);
+const isFiniteNumber = (v: unknown): v is number => typeof v === "number" && Number.isFinite(v);
+
 /** Throws unless every performer is complete; instrument keys are checked against the catalog. */
 export function validatePerformers(performers: readonly PerformerInput[], hasInstrument: (key: string) => boolean): void {
   if (!Array.isArray(performers)) throw new AcousticsInputError("performers", "must be an array");
-  performers.forEach((p, i) => {
-    const f = `performers[${i}]`;
-    if (p === null || typeof p !== "object") throw new AcousticsInputError(f, "must be an object");
-    requireId(p.id, `${f}.id`);
-    requireId(p.section, `${f}.section`);
+  const ids = new Set<string>();
+  // Field names are built only on failure: this runs for every performer of every set.
+  const fail = (i: number, field: string, problem: string) => new AcousticsInputError(`performers[${i}]${field}`, problem);
+  for (let i = 0; i < performers.length; i++) {
+    const p = performers[i];
+    if (p === null || typeof p !== "object") throw fail(i, "", "must be an object");
+    if (typeof p.id !== "string" || p.id.length === 0) throw fail(i, ".id", "must be a non-empty string");
+    if (typeof p.section !== "string" || p.section.length === 0) throw fail(i, ".section", "must be a non-empty string");
     if (typeof p.instrument !== "string" || !hasInstrument(p.instrument)) {
-      throw new AcousticsInputError(`${f}.instrument`, `"${String(p.instrument)}" is not in the instrument catalog`);
+      throw fail(i, ".instrument", `"${String(p.instrument)}" is not in the instrument catalog`);
     }
-    if (p.voice !== "tacet" && !(VOICES as readonly string[]).includes(p.voice)) {
-      throw new AcousticsInputError(`${f}.voice`, `must be one of ${VOICES.join(", ")}, tacet`);
+    if (!VOICE_SET.has(p.voice)) throw fail(i, ".voice", `must be one of ${VOICES.join(", ")}, tacet`);
+    if (!DYNAMIC_SET.has(p.dynamic)) throw fail(i, ".dynamic", `must be one of ${DYNAMICS.join(", ")}`);
+    if (!isFiniteNumber(p.x)) throw fail(i, ".x", "must be a finite number");
+    if (!isFiniteNumber(p.y)) throw fail(i, ".y", "must be a finite number");
+    if (p.z !== undefined) {
+      if (!isFiniteNumber(p.z)) throw fail(i, ".z", "must be a finite number");
+      if (p.z < 0) throw fail(i, ".z", "must not be negative");
     }
-    if (!(DYNAMICS as readonly string[]).includes(p.dynamic)) {
-      throw new AcousticsInputError(`${f}.dynamic`, `must be one of ${DYNAMICS.join(", ")}`);
-    }
-    requireFinite(p.x, `${f}.x`);
-    requireFinite(p.y, `${f}.y`);
-    if (p.z !== undefined && requireFinite(p.z, `${f}.z`) < 0) throw new AcousticsInputError(`${f}.z`, "must not be negative");
-    requireFinite(p.facingDeg, `${f}.facingDeg`);
-    if (p.strengthDb !== undefined) requireFinite(p.strengthDb, `${f}.strengthDb`);
-  });
-  requireUnique(performers.map((p) => p.id), "performers");
+    if (!isFiniteNumber(p.facingDeg)) throw fail(i, ".facingDeg", "must be a finite number");
+    if (p.strengthDb !== undefined && !isFiniteNumber(p.strengthDb)) throw fail(i, ".strengthDb", "must be a finite number");
+    if (ids.has(p.id)) throw fail(i, ".id", `"${p.id}" is used twice`);
+    ids.add(p.id);
+  }
 }
 
 /** Throws unless every listening point has an id and finite coordinates at or above the ground. */
