@@ -1,6 +1,7 @@
 // Database outage, app restarts and two app processes on one database, each on a private cluster.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { Client, uniqueEmail } from "../support/api";
+import { launchBrowser } from "../support/browser";
 import { createCluster, startApp, type App, type Cluster } from "../support/stack";
 
 let cluster: Cluster;
@@ -50,9 +51,16 @@ describe("database outage", () => {
         expect(res.headers.get("content-type"), path).toContain("application/json");
         expect(typeof res.body.error, path).toBe("string");
       }
-      const page = await fetch(`${a.url}/programs`, { headers: { cookie: client.cookie! } });
-      const html = await page.text();
-      expect(html).toContain("database cannot be reached");
+      // A page says so in plain words, in a real browser.
+      const browser = await launchBrowser();
+      try {
+        const [name, value] = client.cookie!.split("=") as [string, string];
+        await browser.context.addCookies([{ name, value, url: a.url }]);
+        await browser.page.goto(`${a.url}/programs`);
+        await expect.poll(() => browser.page.textContent("body"), { timeout: 10_000 }).toContain("database cannot be reached");
+      } finally {
+        await browser.close();
+      }
     } finally {
       cluster.start();
     }
