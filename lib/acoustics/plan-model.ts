@@ -1,0 +1,281 @@
+// The balance plan as numbers: sections that may change (units), the groups whose levels the
+// targets compare (voices, registers of a choir, sections within a voice) and the targets as
+// hinge residuals in dB. Levels are exact for whole dynamic steps (per-band source change,
+// A-weighted at the point) and a uniform dB shift in between, for the continuous solve.
+import { OCTAVE_BANDS, BAND_COUNT } from "./bands";
+import { groupBy, soundingPlayers, type BoxPlayer } from "./box-players";
+import { PYRAMID_FAMILIES, REGISTERS_LOW_TO_HIGH } from "./checks";
+import { instrumentLevelDb } from "./instrument";
+import type { BalanceTargets } from "./targets";
+import { DYNAMICS, VOICES, type AnalysisInput, type Dynamic, type InstrumentSpec, type PointResult, type Voice } from "./types";
+import { aWeightingDb } from "./weighting";
+
+const A_WEIGHT_ENERGY = OCTAVE_BANDS.map((b) => 10 ** (aWeightingDb(b.exactHz) / 10));
+const TOP = DYNAMICS.length - 1;
+
+export interface PlanUnit {
+  section: string;
+  voice: Voice;
+  writtenDynamic: Dynamic;
+  /** Index of the written dynamic in pp…fff. */
+  base: number;
+  performerIds: string[];
+  /** Steps allowed: from pp (kMin = −base) to fff (kMax = TOP − base). */
+  kMin: number;
+  kMax: number;
+}
+
+export type TargetKind = "melody-lead" | "pyramid" | "blend";
+
+export interface Residual {
+  kind: TargetKind;
+  /** r = max(0, c + Σ coef · L[group]). */
+  terms: { group: number; coef: number }[];
+  c: number;
+  /** What the residual is about, for the report (same key across sets). */
+  key: string;
+  describe: (shortDb: number) => string;
+  /** Units the residual involves (for notes and limits). */
+  units: number[];
+}
+
+export interface PlanModel {
+  units: PlanUnit[];
+  /** Per sounding player: unit index (−1 held), energy (A-weighted, at the point) at each dynamic. */
+  playerUnit: Int32Array;
+  playerBase: Int32Array;
+  playerEnergy: Float64Array[];
+  /** Players of each group. */
+  groups: number[][];
+  /** The same, flat: members of group g are groupMembers[groupStart[g] … groupStart[g + 1]). */
+  groupStart: Int32Array;
+  groupMembers: Int32Array;
+  residuals: Residual[];
+}
+
+/** A-weighted energy at the point of one player at every dynamic pp…fff, from its band levels at its own dynamic. */
+function energiesByDynamic(p: BoxPlayer, lwCache: Map<InstrumentSpec, number[][]>): Float64Array {
+  let lw = lwCache.get(p.spec);
+  if (!lw) {
+    lw = DYNAMICS.map((d) => Array.from({ length: BAND_COUNT }, (_, b) => instrumentLevelDb(p.spec, d, b)));
+    lwCache.set(p.spec, lw);
+  }
+  const own = lw[DYNAMICS.indexOf(p.dynamic)]!;
+  const out = new Float64Array(DYNAMICS.length);
+  for (let d = 0; d <= TOP; d++) {
+    let e = 0;
+    for (let b = 0; b < BAND_COUNT; b++) e += 10 ** ((p.bandsDb[b]! + lw[d]![b]! - own[b]!) / 10) * A_WEIGHT_ENERGY[b]!;
+    out[d] = e;
+  }
+  return out;
+}
+
+/** Per section, the most common (voice, dynamic) of its sounding players over all sets: what the section plays. */
+function findUnits(sets: BoxPlayer[][]): PlanUnit[] {
+  const all = sets.flat();
+  const units: PlanUnit[] = [];
+  for (const [section, list] of groupBy(all, (p) => p.section)) {
+    const counts = groupBy(list, (p) => `${p.voice}\u0000${p.dynamic}`);
+    const [, chosen] = [...counts].reduce((a, b) => (b[1].length > a[1].length ? b : a));
+    const first = chosen[0]!;
+    const base = DYNAMICS.indexOf(first.dynamic);
+    units.push({
+      section,
+      voice: first.voice as Voice,
+      writtenDynamic: first.dynamic,
+      base,
+      performerIds: [...new Set(chosen.map((p) => p.id))],
+      kMin: -base,
+      kMax: TOP - base,
+    });
+  }
+  return units;
+}
+
+/** Builds the model of a plan over one or more sets (a phrase) at one listening point. */
+export function buildPlanModel(
+  inputs: readonly AnalysisInput[],
+  points: readonly PointResult[],
+  t: BalanceTargets,
+  setLabels?: readonly string[],
+): PlanModel {
+  const sets = inputs.map((input, n) => soundingPlayers(input, points[n]!));
+  const units = findUnits(sets);
+  const unitOf = new Map<string, number>();
+  units.forEach((u, i) => u.performerIds.forEach((id) => unitOf.set(`${u.section}\u0000${id}`, i)));
+
+  const lwCache = new Map<InstrumentSpec, number[][]>();
+  const playerUnit: number[] = [];
+  const playerBase: number[] = [];
+  const playerEnergy: Float64Array[] = [];
+  const groups: number[][] = [];
+  const residuals: Residual[] = [];
+  const groupUnits = (g: number) => [...new Set(groups[g]!.map((p) => playerUnit[p]!).filter((u) => u >= 0))];
+
+  sets.forEach((players, n) => {
+    const index = new Map<BoxPlayer, number>();
+    for (const p of players) {
+      const unit = unitOf.get(`${p.section}\u0000${p.id}`);
+      const held = unit === undefined || units[unit]!.voice !== p.voice || units[unit]!.writtenDynamic !== p.dynamic;
+      index.set(p, playerUnit.length);
+      playerUnit.push(held ? -1 : unit!);
+      playerBase.push(DYNAMICS.indexOf(p.dynamic));
+      playerEnergy.push(energiesByDynamic(p, lwCache));
+    }
+    const group = (list: BoxPlayer[]) => {
+      groups.push(list.map((p) => index.get(p)!));
+      return groups.length - 1;
+    };
+    const tag = setLabels?.[n] ? ` (set ${setLabels[n]})` : inputs.length > 1 ? ` (set ${n + 1} of ${inputs.length})` : "";
+
+    // Melody lead over every other voice.
+    const byVoice = groupBy(players, (p) => p.voice);
+    const melody = byVoice.get("melody");
+    if (melody) {
+      const gm = group(melody);
+      for (const v of VOICES) {
+        const list = byVoice.get(v);
+        if (v === "melody" || !list) continue;
+        const gv = group(list);
+        residuals.push({
+          kind: "melody-lead",
+          terms: [{ group: gv, coef: 1 }, { group: gm, coef: -1 }],
+          c: t.melodyLeadDb,
+          key: `melody-lead:${v}`,
+          describe: (s) => `The melody stays ${s.toFixed(1)} dB short of leading the ${v} by ${t.melodyLeadDb} dB${tag}.`,
+          units: [...groupUnits(gm), ...groupUnits(gv)],
+        });
+      }
+    }
+
+    // Pyramid within each choir, over the harmony voices.
+    for (const family of PYRAMID_FAMILIES) {
+      const choir = players.filter((p) => p.family === family && (t.pyramidVoices as string[]).includes(p.voice));
+      const byRegister = groupBy(choir, (p) => p.register);
+      const present = REGISTERS_LOW_TO_HIGH.filter((r) => byRegister.has(r)).map((r) => ({ r, g: group(byRegister.get(r)!) }));
+      for (let i = 0; i < present.length; i++) {
+        for (let j = i + 1; j < present.length; j++) {
+          const low = present[i]!;
+          const high = present[j]!;
+          residuals.push({
+            kind: "pyramid",
+            terms: [{ group: high.g, coef: 1 }, { group: low.g, coef: -1 }],
+            c: -t.pyramidToleranceDb,
+            key: `pyramid:${family}:${low.r}:${high.r}`,
+            describe: (s) => `In the ${family === "brass" ? "brass" : "woodwinds"}, the ${low.r} register stays ${s.toFixed(1)} dB too far below the ${high.r}${tag}.`,
+            units: [...groupUnits(low.g), ...groupUnits(high.g)],
+          });
+        }
+      }
+    }
+
+    // Blend: sections doubling a voice stay within the tolerance of each other.
+    for (const [voice, list] of byVoice) {
+      const bySection = [...groupBy(list, (p) => p.section)].map(([section, l]) => ({ section, g: group(l) }));
+      for (let i = 0; i < bySection.length; i++) {
+        for (let j = 0; j < bySection.length; j++) {
+          if (i === j) continue;
+          const a = bySection[i]!;
+          const b = bySection[j]!;
+          residuals.push({
+            kind: "blend",
+            terms: [{ group: a.g, coef: 1 }, { group: b.g, coef: -1 }],
+            c: -t.blendToleranceDb,
+            key: `blend:${voice}:${a.section}:${b.section}`,
+            describe: (s) => `In the ${voice}, the ${a.section} stay ${s.toFixed(1)} dB louder than the ${b.section} beyond the blend tolerance of ${t.blendToleranceDb} dB${tag}.`,
+            units: [...groupUnits(a.g), ...groupUnits(b.g)],
+          });
+        }
+      }
+    }
+  });
+
+  return {
+    units,
+    playerUnit: Int32Array.from(playerUnit),
+    playerBase: Int32Array.from(playerBase),
+    playerEnergy,
+    groups,
+    groupStart: Int32Array.from(groups.reduce((starts, l) => [...starts, starts[starts.length - 1]! + l.length], [0])),
+    groupMembers: Int32Array.from(groups.flat()),
+    residuals,
+  };
+}
+
+/** Sum of squared target residuals for whole steps k per unit: the fast path of the step search. */
+export function targetCostAtSteps(m: PlanModel, k: readonly number[]): number {
+  const G = m.groups.length;
+  const L = new Float64Array(G);
+  for (let g = 0; g < G; g++) {
+    let e = 0;
+    for (let i = m.groupStart[g]!; i < m.groupStart[g + 1]!; i++) {
+      const p = m.groupMembers[i]!;
+      const u = m.playerUnit[p]!;
+      e += m.playerEnergy[p]![m.playerBase[p]! + (u >= 0 ? k[u]! : 0)]!;
+    }
+    L[g] = 10 * Math.log10(e);
+  }
+  let cost = 0;
+  for (const r of m.residuals) {
+    let v = r.c;
+    for (const t of r.terms) v += t.coef * L[t.group]!;
+    if (v > 0) cost += v * v;
+  }
+  return cost;
+}
+
+/** Player energies for whole steps k per unit (exact). */
+export function energiesAtSteps(m: PlanModel, k: readonly number[]): Float64Array {
+  const out = new Float64Array(m.playerUnit.length);
+  for (let p = 0; p < out.length; p++) {
+    const u = m.playerUnit[p]!;
+    out[p] = m.playerEnergy[p]![m.playerBase[p]! + (u >= 0 ? k[u]! : 0)]!;
+  }
+  return out;
+}
+
+/** Player energies for a uniform dB shift x per unit (the continuous relaxation). */
+export function energiesAtShifts(m: PlanModel, x: readonly number[]): Float64Array {
+  const out = new Float64Array(m.playerUnit.length);
+  for (let p = 0; p < out.length; p++) {
+    const u = m.playerUnit[p]!;
+    out[p] = m.playerEnergy[p]![m.playerBase[p]!]! * (u >= 0 ? 10 ** (x[u]! / 10) : 1);
+  }
+  return out;
+}
+
+/** Level (dB) of each group, and each unit's share of each group's energy (∂L/∂x of a uniform shift). */
+export function groupLevels(m: PlanModel, energy: Float64Array): { L: number[]; share: Map<number, number>[] } {
+  const L: number[] = [];
+  const share: Map<number, number>[] = [];
+  for (const members of m.groups) {
+    let total = 0;
+    const byUnit = new Map<number, number>();
+    for (const p of members) {
+      total += energy[p]!;
+      const u = m.playerUnit[p]!;
+      if (u >= 0) byUnit.set(u, (byUnit.get(u) ?? 0) + energy[p]!);
+    }
+    for (const [u, e] of byUnit) byUnit.set(u, e / total);
+    L.push(10 * Math.log10(total));
+    share.push(byUnit);
+  }
+  return { L, share };
+}
+
+/** Value of each target residual (dB, ≥ 0) at the given group levels. */
+export function residualValues(m: PlanModel, L: readonly number[]): number[] {
+  return m.residuals.map((r) => Math.max(0, r.terms.reduce((s, t) => s + t.coef * L[t.group]!, r.c)));
+}
+
+/** Each unit's level change at the point (dB, energy over all its players and sets) at each step kMin…kMax. */
+export function unitChangeDb(m: PlanModel): number[][] {
+  return m.units.map((u, i) => {
+    const players = [...m.playerUnit.keys()].filter((p) => m.playerUnit[p] === i);
+    const at = (k: number) => players.reduce((s, p) => s + m.playerEnergy[p]![m.playerBase[p]! + k]!, 0);
+    const e0 = at(0);
+    const out: number[] = [];
+    for (let k = u.kMin; k <= u.kMax; k++) out.push(10 * Math.log10(at(k) / e0));
+    return out;
+  });
+}
