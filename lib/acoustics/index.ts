@@ -24,3 +24,6 @@ export { toJsonSafe, type JsonSafe } from "./json";
 export { cWeightingDb } from "./c-weighting";
 export { fitCarryOffsets, applyCarryOffsets, type BoxReading, type FitCarryOptions, type CarryFit, type Determination } from "./calibration";
 export { hearingMap, EAR_HEIGHT_M, HEARING_MIN_DISTANCE_M, type HearingOptions, type HearingMap, type PerformerHearing, type ExposureAt } from "./hearing";
+export { checkBalance } from "./checks";
+export { planBalance, solveBalancePlan, applyPlan, type PlanEntryDetail, type BalancePlan, type UnmetTarget, type PlanInput } from "./plan";
+export { DEFAULT_TARGETS, resolveTargets, TARGET_RANGES, type BalanceTargets } from "./targets";
