@@ -43,7 +43,9 @@ export async function launchBrowser(options: { width?: number; height?: number }
   });
   const watch = (page: Page) => {
     page.on("console", (msg) => {
-      if (msg.type() === "error" || msg.text().includes("Refused to")) problems.push(`console: ${msg.text()}`);
+      if (msg.type() !== "error" && !msg.text().includes("Refused to")) return;
+      const where = msg.location().url;
+      problems.push(`console: ${msg.text()}${where ? ` (${where})` : ""}`);
     });
     page.on("pageerror", (err) => problems.push(`page error: ${err.message}`));
   };

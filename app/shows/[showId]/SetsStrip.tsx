@@ -16,6 +16,7 @@ export function SetsStrip({ showId, sets }: { showId: string; sets: SetSummary[]
           <li key={s.id}>
             <Link
               href={`/shows/${showId}/sets/${s.id}`}
+              prefetch={false}
               className="relative flex min-h-20 flex-col justify-between rounded-lg border border-ink/15 bg-paper px-3 py-2 hover:border-turf hover:bg-turf-light/40"
             >
               <span className="text-xl font-bold text-ink">
