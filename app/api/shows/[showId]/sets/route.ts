@@ -1,0 +1,31 @@
+import { NextResponse } from "next/server";
+import { createSet, findSetInShow } from "@/db/queries/sets";
+import { listSets } from "@/db/queries/shows";
+import { requireShow } from "@/lib/auth/access";
+import { insertedSetNumber, nextSetNumber } from "@/lib/editor/naming";
+import { badRequest, conflict } from "@/lib/http/errors";
+import { readJson } from "@/lib/http/body";
+import { route } from "@/lib/http/handler";
+import { createSetSchema } from "@/lib/validation/sets";
+
+/** Counts of a new set when none are given: two bars of 4/4 (common practice, no source). */
+const DEFAULT_COUNTS = 8;
+
+/** Adds a set (empty, at the end or after a set) or duplicates one (its positions, right after it). */
+export const POST = route<{ showId: string }>(async (req, { showId }) => {
+  await requireShow(showId, "edit-drill");
+  const body = await readJson(req, createSetSchema);
+  const known = async (id: string | undefined, field: string) => {
+    if (!id) return null;
+    const set = await findSetInShow(showId, id);
+    if (!set) throw badRequest(`${field} is not a set of this show.`, { [field]: ["unknown set"] });
+    return set;
+  };
+  const source = await known(body.duplicateOf, "duplicateOf");
+  const after = (await known(body.after, "after")) ?? source;
+  const numbers = (await listSets(showId)).map((s) => s.number);
+  const number = body.number ?? (after ? insertedSetNumber(after.number, numbers) : nextSetNumber(numbers));
+  const result = await createSet(showId, { number, counts: body.counts ?? source?.counts ?? DEFAULT_COUNTS, after, copyFromSetId: source?.id ?? null });
+  if (!result.ok) throw conflict(`A set numbered ${number} already exists in this show.`);
+  return NextResponse.json({ set: result.set }, { status: 201 });
+});
