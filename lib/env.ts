@@ -11,6 +11,10 @@ const schema = z.object({
   SMTP_USER: z.string().optional(),
   SMTP_PASSWORD: z.string().optional(),
   SMTP_FROM: z.string().default("Farfield <no-reply@farfield.example>"),
+  /** Where the local fake SMTP server keeps the messages it receives (scripts/fake-smtp.ts). */
+  MAIL_DIR: z.string().default(".data/mail"),
+  /** "true" when npm start or npm test run the fake SMTP server: the demo's directors may read its messages. */
+  DEV_MAILBOX: z.enum(["true", "false"]).optional(),
   /** Cookies are Secure unless the app is served on plain http (local use). */
   COOKIE_SECURE: z.enum(["true", "false"]).optional(),
 });

@@ -22,4 +22,10 @@ cat <<MSG
   PostgreSQL keeps its data in .data/pg (npm run db:stop stops it).
 
 MSG
+# Without SMTP settings of its own, mail goes to the local fake server, which keeps every message in
+# .data/mail (readable by the demo's directors at /dev/mail) and stops when the app does.
+if [ -z "${SMTP_HOST:-}" ]; then
+  export DEV_MAILBOX=true MAIL_DIR="${MAIL_DIR:-$ROOT/.data/mail}"
+  FAKE_SMTP_WATCH_PID=$$ npx tsx scripts/fake-smtp.ts &
+fi
 exec npx next start -H 127.0.0.1 -p "$PORT"

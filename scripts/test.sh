@@ -8,6 +8,12 @@ cd "$ROOT"
 ensure_node_modules
 ensure_postgres
 ensure_chromium
+command -v pdftoppm >/dev/null || apt_install poppler-utils # renders the PDF sheets in the tests
+
+# The fake SMTP server keeps what the app sends in .tmp/mail-test (tests read it); it exits with this script.
+export SMTP_HOST=127.0.0.1 SMTP_PORT="$(free_port)" DEV_MAILBOX=true MAIL_DIR="$ROOT/.tmp/mail-test"
+rm -rf "$MAIL_DIR"
+FAKE_SMTP_WATCH_PID=$$ npx tsx scripts/fake-smtp.ts >"$ROOT/.tmp/fake-smtp.log" 2>&1 &
 stack_up test
 
 status=0
