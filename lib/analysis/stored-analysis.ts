@@ -1,0 +1,57 @@
+// A set's analysis at a listening point: box mix, balance checks and balance plan, stored together
+// and reused while the hash of everything they depend on is unchanged.
+import "server-only";
+import { createHash } from "node:crypto";
+import { findStoredAnalysis, loadSetContext, storeAnalysis } from "@/db/queries/set-context";
+import type { Show } from "@/db/schema";
+import { analyzeSet, checkBalance, solveBalancePlan, toJsonSafe } from "@/lib/acoustics";
+import { BALANCE_VERSION } from "@/lib/acoustics/targets";
+import type { AnalysisInput, InstrumentCatalog } from "@/lib/acoustics/types";
+import { MODEL_VERSION } from "@/lib/acoustics/version";
+import { notFound } from "@/lib/http/errors";
+import { setInputs } from "./balance-inputs";
+import { showConditions } from "./set-input";
+import { showTargets } from "./show-targets";
+import { mixOf } from "./stored-mix";
+
+const STORED_VERSION = `${MODEL_VERSION}+${BALANCE_VERSION}`;
+
+export function balanceHash(played: AnalysisInput, written: AnalysisInput, targets: unknown, listeningPointId: string): string {
+  return createHash("sha256")
+    .update(JSON.stringify({ played, written: written.performers.map((p) => p.dynamic), targets, listeningPointId }))
+    .digest("hex");
+}
+
+/** Mix, checks and plan of one set at one listening point, computed from the two inputs. */
+export function computeBalance(played: AnalysisInput, written: AnalysisInput, listeningPointId: string, targets: ReturnType<typeof showTargets>) {
+  const point = played.listeningPoints.find((l) => l.id === listeningPointId)!;
+  const pr = analyzeSet({ ...played, listeningPoints: [point] }).points[0]!;
+  const plan = solveBalancePlan([{ ...written, listeningPoints: [point] }], listeningPointId, targets);
+  return toJsonSafe({ mix: mixOf(pr), checks: checkBalance(played, pr, targets), plan: plan.entries, planUnmet: plan.unmet });
+}
+
+export type StoredBalance = ReturnType<typeof computeBalance>;
+
+export async function storedAnalysis(show: Show, set: { id: string; order: number }, listeningPointId: string) {
+  const ctx = await loadSetContext(show, set);
+  if (!ctx.listeningPoints.some((l) => l.id === listeningPointId)) throw notFound("No such listening point in this show.");
+  const targets = showTargets(show.checkTargets);
+  const { played, written } = setInputs(
+    {
+      roster: ctx.roster,
+      music: ctx.music,
+      listeningPoints: ctx.listeningPoints,
+      conditions: showConditions(show),
+      instruments: (ctx.catalog?.instruments as InstrumentCatalog | undefined) ?? undefined,
+    },
+    { order: set.order, positions: ctx.positions },
+  );
+  const hash = balanceHash(played, written, targets, listeningPointId);
+  const stored = await findStoredAnalysis(set.id, listeningPointId);
+  if (stored && stored.inputsHash === hash && stored.modelVersion === STORED_VERSION) {
+    return { result: stored.result as StoredBalance, computedAt: stored.computedAt, reused: true };
+  }
+  const result = computeBalance(played, written, listeningPointId, targets);
+  const computedAt = await storeAnalysis({ setId: set.id, listeningPointId, inputsHash: hash, modelVersion: STORED_VERSION, result });
+  return { result, computedAt, reused: false };
+}

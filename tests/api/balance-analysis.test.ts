@@ -1,0 +1,59 @@
+// The analysis endpoint's checks and plan (shared/API.md), against the demo in real PostgreSQL.
+import { beforeAll, describe, expect, it } from "vitest";
+import { DEMO, demoIds, signedIn, type Client } from "../support/api";
+
+let ids: Awaited<ReturnType<typeof demoIds>>;
+let staff: Client;
+const setId = (number: string) => ids.show.sets.find((s: any) => s.number === number).id as string;
+const analysisPath = (number: string) => `/api/shows/${ids.showId}/sets/${setId(number)}/analysis?listeningPointId=${ids.pressBoxId}`;
+
+beforeAll(async () => {
+  ids = await demoIds();
+  staff = await signedIn(DEMO.staff);
+});
+
+describe("GET analysis: checks and plan", () => {
+  it("answers the six checks in order, each with a plain detail and the performers to look at", async () => {
+    const res = await staff.get(analysisPath("7"));
+    expect(res.status).toBe(200);
+    expect(res.body.checks.map((c: any) => c.id)).toEqual(["melody-forward", "bass-up-pyramid", "depth-support", "wide-form-edges", "stand-outs", "arrival-spread"]);
+    const performerIds = new Set(ids.show.performers.map((p: any) => p.id));
+    for (const c of res.body.checks) {
+      expect(Object.keys(c).sort()).toEqual(["detail", "id", "passed", "performerIds"]);
+      expect(c.detail.length).toBeGreaterThan(10);
+      for (const id of c.performerIds) expect(performerIds.has(id)).toBe(true);
+      if (c.passed) expect(c.performerIds).toEqual([]);
+    }
+  });
+
+  it("finds the demo's clarinet melody (written p over brass at p) not forward, and plans the clarinets up (common practice, no source)", async () => {
+    const res = await staff.get(analysisPath("7"));
+    const melody = res.body.checks.find((c: any) => c.id === "melody-forward");
+    expect(melody.passed).toBe(false);
+    expect(melody.detail).toMatch(/below the accompaniment/);
+    const clarinets = res.body.plan.find((e: any) => e.section === "Clarinets");
+    expect(clarinets).toMatchObject({ writtenDynamic: "p" });
+    const order = ["pp", "p", "mp", "mf", "f", "ff", "fff"];
+    expect(order.indexOf(clarinets.playedDynamic)).toBeGreaterThan(order.indexOf("p"));
+    expect(clarinets.changeDb).toBeGreaterThan(0);
+    for (const e of res.body.plan) {
+      expect(order).toContain(e.writtenDynamic);
+      expect(order).toContain(e.playedDynamic);
+      expect(Number.isFinite(e.changeDb)).toBe(true);
+    }
+  });
+
+  it("stores checks and plan with the mix and reuses them while nothing changed", async () => {
+    const first = await staff.get(analysisPath("3"));
+    const second = await staff.get(analysisPath("3"));
+    expect(second.body.reused).toBe(true);
+    expect(second.body.computedAt).toBe(first.body.computedAt);
+    expect(second.body.checks).toEqual(first.body.checks);
+    expect(second.body.plan).toEqual(first.body.plan);
+  });
+
+  it("answers 404 to a member of another program", async () => {
+    const res = await ids.other.get(analysisPath("7"));
+    expect(res.status).toBe(404);
+  });
+});
