@@ -13,9 +13,9 @@ export function ListeningPoints({ points }: { points: ListeningPoint[] }) {
         <thead>
           <tr className="border-b border-ink/15 text-ink-soft">
             <th scope="col" className="py-2 pr-3 font-semibold">Name</th>
-            <th scope="col" className="px-3 py-2 text-right font-semibold">x</th>
-            <th scope="col" className="px-3 py-2 text-right font-semibold">y</th>
-            <th scope="col" className="py-2 pl-3 text-right font-semibold">Height z</th>
+            <th scope="col" className="whitespace-nowrap px-2 py-2 text-right font-semibold">x</th>
+            <th scope="col" className="whitespace-nowrap px-2 py-2 text-right font-semibold">y</th>
+            <th scope="col" className="whitespace-nowrap py-2 pl-2 text-right font-semibold">Height z</th>
           </tr>
         </thead>
         <tbody>
@@ -25,9 +25,9 @@ export function ListeningPoints({ points }: { points: ListeningPoint[] }) {
                 {p.name}
                 <span className="block text-sm font-normal text-ink-soft">{depthWords(p.y)}</span>
               </th>
-              <td className="px-3 py-3 text-right tabular-nums">{metres(p.x)}</td>
-              <td className="px-3 py-3 text-right tabular-nums">{metres(p.y)}</td>
-              <td className="py-3 pl-3 text-right tabular-nums">{metres(p.z)}</td>
+              <td className="whitespace-nowrap px-2 py-3 text-right tabular-nums">{metres(p.x)}</td>
+              <td className="whitespace-nowrap px-2 py-3 text-right tabular-nums">{metres(p.y)}</td>
+              <td className="whitespace-nowrap py-3 pl-2 text-right tabular-nums">{metres(p.z)}</td>
             </tr>
           ))}
         </tbody>

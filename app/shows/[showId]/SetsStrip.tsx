@@ -11,7 +11,7 @@ export function SetsStrip({ showId, sets }: { showId: string; sets: SetSummary[]
   const rows = sets.map((s) => ({ ...s, at: (running += s.counts) }));
   return (
     <div>
-      <ol className="mb-3 grid grid-cols-[repeat(auto-fill,minmax(5.75rem,1fr))] gap-3" aria-label="Sets in order">
+      <ol className="mb-3 grid grid-cols-[repeat(auto-fill,minmax(6.25rem,1fr))] gap-3" aria-label="Sets in order">
         {rows.map((s) => (
           <li key={s.id}>
             <Link
