@@ -53,7 +53,7 @@ test("the director signs in, opens Harbor Ridge and sees the show overview", asy
   // The breadcrumbs lead back to the program.
   await expect.poll(() => page.getByRole("navigation", { name: "Breadcrumb" }).getByRole("link", { name: /Harbor Ridge/ }).isVisible()).toBe(true);
   // The header names the signed-in user.
-  expect(await page.locator("header").textContent()).toMatch(/Signed in as/);
+  expect(await page.getByRole("banner").textContent()).toMatch(/Signed in as/);
 });
 
 test("no console errors and no CSP violations on the way", () => {
