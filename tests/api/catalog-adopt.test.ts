@@ -1,0 +1,116 @@
+// Calibration through the API: fit preview, a director adopts it (new catalog version, stored mixes
+// recompute), restore an earlier version; roles and stale versions.
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { Client, DEMO, demoIds, signedIn } from "../support/api";
+import { readingBody, removeReadings } from "./readings-support";
+
+let ids: Awaited<ReturnType<typeof demoIds>>;
+let staff: Client;
+let designer: Client;
+const created: string[] = [];
+const catalog = () => `/api/programs/${ids.programId}/catalog`;
+const analysis = () => `/api/shows/${ids.showId}/sets/${ids.setIds[0]}/analysis?listeningPointId=${ids.pressBoxId}`;
+
+beforeAll(async () => {
+  ids = await demoIds();
+  staff = await signedIn(DEMO.staff);
+  designer = await signedIn(DEMO.designer);
+  // An evening at the box: trumpets alone twice, tubas alone, both together.
+  const bodies = [
+    readingBody(ids, { sections: [{ section: "Trumpets", dynamic: "f" }], measuredDb: 78 }),
+    readingBody(ids, { sections: [{ section: "Trumpets", dynamic: "mf" }], measuredDb: 73 }),
+    readingBody(ids, { sections: [{ section: "Tubas", dynamic: "ff" }], measuredDb: 70 }),
+    readingBody(ids, { sections: [{ section: "Trumpets", dynamic: "ff" }, { section: "Tubas", dynamic: "ff" }], measuredDb: 82 }),
+  ];
+  for (const b of bodies) {
+    const res = await staff.post(`/api/shows/${ids.showId}/readings`, b);
+    if (res.status !== 201) throw new Error(`reading answered ${res.status}: ${JSON.stringify(res.body)}`);
+    created.push(res.body.reading.id);
+  }
+});
+afterAll(async () => removeReadings(ids.director, ids.showId, created));
+
+describe("catalog fit, adopt and restore", () => {
+  it("previews predicted against measured before and after, changing only instruments the readings involve", async () => {
+    const fit = await staff.get(`${catalog()}/fit?showId=${ids.showId}`);
+    expect(fit.status).toBe(200);
+    const mine = fit.body.readings.filter((r: any) => created.includes(r.id));
+    expect(mine).toHaveLength(4);
+    expect(Object.keys(fit.body.offsetsDb).sort()).toEqual(["trumpet", "tuba"]);
+    expect(fit.body.rmsAfterDb).toBeLessThan(fit.body.rmsBeforeDb);
+    for (const r of mine) expect(Math.abs(r.predictedAfterDb - r.measuredDb)).toBeLessThan(Math.abs(r.predictedBeforeDb - r.measuredDb) + 1e-9);
+    // A section heard alone moves its instrument by about measured − predicted (Tikhonov shrinks it a little).
+    const alone = mine.find((r: any) => r.sections.length === 1 && r.sections[0].section === "Tubas");
+    expect(Math.abs(alone.predictedAfterDb - alone.measuredDb)).toBeLessThan(1.5);
+    expect(fit.body.instruments.map((i: any) => i.key)).toEqual(["trumpet", "tuba"]);
+    expect(fit.body.indistinguishable).toEqual([]);
+  });
+
+  it("lets only a director adopt (403 for staff and designer, 404 for another program, 400 with no readings)", async () => {
+    const base = (await staff.get(catalog())).body.currentVersion;
+    expect((await staff.post(`${catalog()}/adopt`, { baseVersion: base })).status).toBe(403);
+    expect((await designer.post(`${catalog()}/adopt`, { baseVersion: base })).status).toBe(403);
+    expect((await ids.other.post(`${catalog()}/adopt`, { baseVersion: base })).status).toBe(404);
+    expect((await ids.director.post(`${catalog()}/adopt`, { baseVersion: "one" })).status).toBe(400);
+    const otherBase = (await ids.other.get(`/api/programs/${ids.otherProgramId}/catalog`)).body.currentVersion;
+    expect((await ids.other.post(`/api/programs/${ids.otherProgramId}/catalog/adopt`, { baseVersion: otherBase })).status).toBe(400);
+    expect((await staff.get(catalog())).body.currentVersion).toBe(base);
+  });
+
+  it("adopts the fit as a new version, after which the stored analysis recomputes; restoring goes back", async () => {
+    const before = (await staff.get(catalog())).body;
+    const base = before.currentVersion as number;
+    const carry0 = before.versions[0].carryDb;
+    await ids.director.get(analysis());
+    const settled = await ids.director.get(analysis());
+    expect(settled.body.reused).toBe(true);
+    const totalBefore = settled.body.mix.totalDbA as number;
+
+    expect((await ids.director.post(`${catalog()}/adopt`, { baseVersion: base - 1 })).status).toBe(409);
+    const fit = (await ids.director.get(`${catalog()}/fit?showId=${ids.showId}`)).body;
+    const adopt = await ids.director.post(`${catalog()}/adopt`, { baseVersion: base, showId: ids.showId });
+    expect(adopt.status).toBe(201);
+    expect(adopt.body.version).toBe(base + 1);
+    expect(adopt.body.offsetsDb).toEqual(fit.offsetsDb);
+
+    const after = (await staff.get(catalog())).body;
+    expect(after.currentVersion).toBe(base + 1);
+    expect(after.versions[0].note).toMatch(/Fit to \d+ box readings/);
+    expect(after.versions[0].carryDb.trumpet).toBeCloseTo(carry0.trumpet + fit.offsetsDb.trumpet, 9);
+    expect(after.versions[0].carryDb.tuba).toBeCloseTo(carry0.tuba + fit.offsetsDb.tuba, 9);
+    for (const k of Object.keys(carry0)) if (k !== "trumpet" && k !== "tuba") expect(after.versions[0].carryDb[k]).toBe(carry0[k]);
+
+    const recomputed = await ids.director.get(analysis());
+    expect(recomputed.status).toBe(200);
+    expect(recomputed.body.reused).toBe(false);
+    expect(recomputed.body.mix.totalDbA).not.toBeCloseTo(totalBefore, 3);
+    // The same readings refitted from the adopted catalog need (almost) nothing more.
+    const refit = (await ids.director.get(`${catalog()}/fit?showId=${ids.showId}`)).body;
+    expect(refit.baseVersion).toBe(base + 1);
+    expect(Math.abs(refit.offsetsDb.trumpet)).toBeLessThan(0.2);
+
+    expect((await staff.post(`${catalog()}/restore`, { version: base, baseVersion: base + 1 })).status).toBe(403);
+    expect((await ids.director.post(`${catalog()}/restore`, { version: 9999, baseVersion: base + 1 })).status).toBe(404);
+    expect((await ids.director.post(`${catalog()}/restore`, { version: base, baseVersion: base })).status).toBe(409);
+    const restore = await ids.director.post(`${catalog()}/restore`, { version: base, baseVersion: base + 1 });
+    expect(restore.status).toBe(201);
+    expect(restore.body.version).toBe(base + 2);
+    const restored = (await staff.get(catalog())).body;
+    expect(restored.versions[0].carryDb).toEqual(carry0);
+    expect(restored.versions[0].note).toMatch(new RegExp(`Restored version ${base}`));
+    const back = await ids.director.get(analysis());
+    expect(back.body.reused).toBe(false);
+    expect(back.body.mix.totalDbA).toBeCloseTo(totalBefore, 9);
+  });
+
+  it("lists versions to every member and to no one else", async () => {
+    const res = await staff.get(catalog());
+    expect(res.status).toBe(200);
+    const versions = res.body.versions.map((v: any) => v.version);
+    expect(versions).toEqual([...versions].sort((a: number, b: number) => b - a));
+    expect((await ids.other.get(catalog())).status).toBe(404);
+    expect((await ids.other.get(`${catalog()}/fit`)).status).toBe(404);
+    expect((await new Client().get(catalog())).status).toBe(401);
+    expect((await staff.get(`${catalog()}/fit?showId=nope`)).status).toBe(400);
+  });
+});
