@@ -1,5 +1,5 @@
 // Sign-in and sign-up input, shared by the forms and the route handlers.
-import { z } from "zod";
+import { z } from "./zod";
 import { MIN_PASSWORD_LENGTH } from "@/lib/auth/password-rules";
 
 const email = z

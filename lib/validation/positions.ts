@@ -1,5 +1,5 @@
 // A set's positions as the API takes them (shared/API.md): metres in the field frame, facing in degrees.
-import { z } from "zod";
+import { z } from "./zod";
 
 /** Positions may lie at most this far beyond a sideline or end line (shared/API.md). */
 export const FIELD_MARGIN_M = 10;

@@ -1,6 +1,5 @@
 "use client";
 // Posts the e-mail and password as JSON; shows field errors and the API's message; never refills the password.
-import "@/components/zod-jitless";
 import { useRouter } from "next/navigation";
 import { useRef, useState, type FormEvent } from "react";
 import { Button } from "@/components/Button";

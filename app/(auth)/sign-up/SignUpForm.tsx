@@ -1,6 +1,5 @@
 "use client";
 // Creates the account and its program, then opens the new program. The password is never refilled.
-import "@/components/zod-jitless";
 import { useRouter } from "next/navigation";
 import { useRef, useState, type FormEvent } from "react";
 import { Button } from "@/components/Button";
