@@ -5,14 +5,16 @@
 import { absorptionDbPerKmUnchecked, speedOfSound } from "./atmosphere";
 import { BAND_COUNT, OCTAVE_BANDS } from "./bands";
 import { DEFAULT_INSTRUMENTS } from "./catalog";
-import { angleFromFacingDeg, compileDirectivity, directivityInto, type CompiledDirectivity } from "./directivity";
+import { angleFromFacingDeg, directivityInto, type CompiledDirectivity } from "./directivity";
 import { AcousticsInputError } from "./errors";
 import { GROUND_TERM_COUNT, groundBandsInto, regionTermsInto } from "./ground";
-import { instrumentBandsInto, validateInstrumentSpec } from "./instrument";
+import { instrumentTables, type InstrumentTables } from "./instrument-tables";
 import { aWeightingDb } from "./weighting";
 import { DEFAULT_SOURCE_HEIGHT_M, validateConditions, validateListeningPoints, validatePerformers } from "./validate";
 import {
+  DYNAMICS,
   VOICES,
+  type Dynamic,
   type AnalysisInput,
   type AnalysisResult,
   type InstrumentCatalog,
@@ -30,6 +32,7 @@ const TERMS = GROUND_TERM_COUNT;
 const directivityAt = directivityInto;
 const angleOf = angleFromFacingDeg;
 const groundAt = groundBandsInto;
+const DYNAMIC_INDEX = Object.fromEntries(DYNAMICS.map((d, i) => [d, i])) as Record<Dynamic, number>;
 
 /** Closer than this the point-source model does not hold; distances are clamped to it. */
 export const MIN_DISTANCE_M = 0.5;
@@ -116,9 +119,7 @@ export function createSetEvaluator(input: AnalysisInput): SetEvaluator {
   const P = performers.length;
   const N = points.length;
 
-  // Per instrument: checked once, directivity flattened; per instrument and dynamic: band powers.
-  const directivities = new Map<string, CompiledDirectivity>();
-  const bandCache = new Map<string, Map<string, Float64Array>>();
+  const tablesByKey = new Map<string, InstrumentTables>();
   const sectionIndex = new Map<string, number>();
   const sectionNames: string[] = [];
   const indexById = new Map<string, number>();
@@ -135,23 +136,15 @@ export function createSetEvaluator(input: AnalysisInput): SetEvaluator {
   for (let p = 0; p < P; p++) {
     const perf = performers[p];
     const spec = catalog[perf.instrument];
-    let dir = directivities.get(perf.instrument);
-    if (!dir) {
-      validateInstrumentSpec(spec, `instruments.${perf.instrument}`);
-      dir = compileDirectivity(spec.directivity, `instruments.${perf.instrument}.directivity`);
-      directivities.set(perf.instrument, dir);
+    let tables = tablesByKey.get(perf.instrument);
+    if (!tables) {
+      tables = instrumentTables(spec, `instruments.${perf.instrument}`);
+      tablesByKey.set(perf.instrument, tables);
     }
-    dirOf[p] = dir;
-    let byDynamic = bandCache.get(perf.instrument);
-    if (!byDynamic) bandCache.set(perf.instrument, (byDynamic = new Map()));
-    let bands = byDynamic.get(perf.dynamic);
-    if (!bands) {
-      bands = new Float64Array(B);
-      instrumentBandsInto(spec, perf.dynamic, bands);
-      byDynamic.set(perf.dynamic, bands);
-    }
+    dirOf[p] = tables.directivity;
+    const bandOffset = DYNAMIC_INDEX[perf.dynamic] * B;
     const offset = spec.carryDb + (perf.strengthDb ?? 0);
-    for (let b = 0; b < B; b++) base[p * B + b] = bands[b] + offset;
+    for (let b = 0; b < B; b++) base[p * B + b] = tables.bandsByDynamic[bandOffset + b] + offset;
     let s = sectionIndex.get(perf.section);
     if (s === undefined) {
       s = sectionNames.length;

@@ -104,3 +104,14 @@ describe("toJsonSafe", () => {
     expect(JSON.parse(JSON.stringify(safe))).toEqual(safe);
   });
 });
+
+describe("instrument overrides are read afresh unless frozen", () => {
+  it("follows a mutable override changed between calls", () => {
+    const spec = structuredClone(DEFAULT_INSTRUMENTS.trumpet);
+    const input = (): AnalysisInput => ({ ...good(), instruments: { trumpet: spec } });
+    const a = analyzeSet(input()).points[0].totalDbA;
+    for (const d of Object.keys(spec.powerDb) as (keyof typeof spec.powerDb)[]) spec.powerDb[d] += 5;
+    const b = analyzeSet(input()).points[0].totalDbA;
+    expect(b - a).toBeCloseTo(5, 9);
+  });
+});
