@@ -119,3 +119,18 @@ describe("default instrument catalog", () => {
     }).toThrow();
   });
 });
+
+describe("catalog helpers", () => {
+  it("interpolates directivity linearly in angle and folds angles beyond 180°", async () => {
+    const { directivityDb } = await import("@/lib/acoustics");
+    const t = DEFAULT_INSTRUMENTS.trumpet;
+    const row = t.directivity.bandsDb[5];
+    expect(directivityDb(t, 5, 67.5)).toBeCloseTo((row[1] + row[2]) / 2, 12);
+    expect(directivityDb(t, 5, 270)).toBeCloseTo(row[2], 12);
+    expect(directivityDb(t, 5, -45)).toBeCloseTo(row[1], 12);
+  });
+  it("rejects a band index outside the table", () => {
+    expect(() => instrumentLevelDb(DEFAULT_INSTRUMENTS.flute, "p", 8)).toThrow("bandIndex");
+    expect(() => instrumentLevelDb(DEFAULT_INSTRUMENTS.flute, "p", 1.5)).toThrow("bandIndex");
+  });
+});
