@@ -1,0 +1,42 @@
+// The balance plan of a phrase at a listening point: one plan over all the phrase's sets, with the
+// box mix and the checks of each set before (as played now) and after (the plan applied to the written).
+import "server-only";
+import { analyzeSet, applyPlan, checkBalance, solveBalancePlan, toJsonSafe } from "@/lib/acoustics";
+import type { AnalysisInput, PointResult } from "@/lib/acoustics/types";
+import { notFound } from "@/lib/http/errors";
+import { setInputs } from "./balance-inputs";
+import type { ShowBalance } from "./show-context";
+
+function summary(input: AnalysisInput, point: PointResult, targets: ShowBalance["targets"]) {
+  return {
+    totalDbA: point.totalDbA,
+    voices: Object.fromEntries(Object.entries(point.voices).map(([v, l]) => [v, { dbA: l!.dbA }])),
+    sections: Object.fromEntries(Object.entries(point.sections).map(([s, l]) => [s, { dbA: l.dbA }])),
+    checks: checkBalance(input, point, targets),
+  };
+}
+
+export function phrasePlan(sb: ShowBalance, phraseId: string, listeningPointId: string) {
+  const phrase = sb.music.phrases.find((p) => p.id === phraseId);
+  if (!phrase) throw notFound("No such phrase.");
+  const point = sb.listeningPoints.find((l) => l.id === listeningPointId);
+  if (!point) throw notFound("No such listening point in this show.");
+  const lp = [{ id: point.id, x: point.x, y: point.y, z: point.z }];
+  const sets = sb.sets.filter((s) => s.order >= phrase.firstOrder && s.order <= phrase.lastOrder && s.positions.length > 0);
+  const inputs = sets.map((s) => {
+    const { played, written } = setInputs(sb.ctx, { order: s.order, positions: s.positions });
+    return { played: { ...played, listeningPoints: lp }, written: { ...written, listeningPoints: lp } };
+  });
+  const plan = solveBalancePlan(inputs.map((i) => i.written), point.id, sb.targets, sets.map((s) => s.number));
+  const perSet = sets.map((s, n) => {
+    const { played, written } = inputs[n]!;
+    const after = applyPlan(written, plan.entries);
+    return {
+      setId: s.id,
+      number: s.number,
+      before: summary(played, analyzeSet(played).points[0]!, sb.targets),
+      after: summary(after, analyzeSet(after).points[0]!, sb.targets),
+    };
+  });
+  return toJsonSafe({ phrase: { id: phrase.id, name: phrase.name }, listeningPointId, entries: plan.entries, unmet: plan.unmet, sets: perSet });
+}
