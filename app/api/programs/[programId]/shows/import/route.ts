@@ -1,0 +1,30 @@
+import { NextResponse } from "next/server";
+import { currentCatalog } from "@/db/queries/catalog";
+import { importShowFile } from "@/db/queries/show-export";
+import { requireProgram } from "@/lib/auth/access";
+import { badRequest } from "@/lib/http/errors";
+import { route } from "@/lib/http/handler";
+import { readUpload } from "@/lib/http/upload";
+import { readShowFile } from "@/lib/show-file/read";
+import { z } from "zod";
+
+const MAX_SHOW_FILE_BYTES = 5_000_000;
+const nameSchema = z.string().trim().min(1).max(160).optional();
+
+/**
+ * A show file (multipart `file`, optional `name`) becomes a new show of the program. A damaged or
+ * foreign file, or one with instruments the program's catalog lacks, is refused and nothing is written.
+ */
+export const POST = route<{ programId: string }>(async (req, { programId }) => {
+  const { user } = await requireProgram(programId, "manage-show");
+  const upload = await readUpload(req, MAX_SHOW_FILE_BYTES);
+  const read = readShowFile(new TextDecoder("utf-8").decode(upload.bytes));
+  if (!read.ok) throw badRequest(read.error, read.issues);
+  const name = nameSchema.safeParse(upload.fields.name || undefined);
+  if (!name.success) throw badRequest("The new show's name is not valid.", { name: ["Use 1 to 160 characters."] });
+  const catalog = (await currentCatalog(programId))?.instruments as Record<string, unknown> | undefined;
+  const unknown = [...new Set(read.file.performers.map((p) => p.instrument))].filter((i) => !catalog || !(i in catalog));
+  if (unknown.length) throw badRequest(`This program's instrument catalog has no ${unknown.join(", ")}; add them before importing this show.`);
+  const showId = await importShowFile(programId, read.file, { fileName: upload.fileName, content: upload.bytes, uploadedBy: user.id }, name.data);
+  return NextResponse.json({ show: { id: showId, name: name.data ?? read.file.show.name } }, { status: 201 });
+});
