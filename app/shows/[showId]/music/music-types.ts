@@ -1,0 +1,33 @@
+// The answers of the music and phrase-plan routes, as the music page reads them.
+export type MusicPhrase = { id: string; name: string; order: number; firstSetId: string; lastSetId: string; firstSetNumber: string | null; lastSetNumber: string | null };
+export type Assignment = { phraseId: string; section: string; voice: string; writtenDynamic: string; playedDynamic: string | null };
+export type Override = Assignment & { performerId: string; note: string };
+export type MusicResponse = {
+  phrases: MusicPhrase[];
+  sets: { id: string; number: string; order: number }[];
+  sections: { name: string; players: number }[];
+  performers: { id: string; label: string; section: string; instrument: string }[];
+  assignments: Assignment[];
+  overrides: Override[];
+  canEdit: boolean;
+  canAdopt: boolean;
+};
+export type CheckDto = { id: string; passed: boolean; detail: string; performerIds: string[] };
+export type PlanEntryDto = {
+  section: string;
+  writtenDynamic: string;
+  playedDynamic: string;
+  changeDb: number;
+  voice: string;
+  performerIds: string[];
+  atLimit?: "pp" | "fff";
+  unreachable?: string[];
+};
+export type MixSummary = { totalDbA: number | null; voices: Record<string, { dbA: number | null }>; sections: Record<string, { dbA: number | null }>; checks: CheckDto[] };
+export type PhrasePlanResponse = {
+  phrase: { id: string; name: string };
+  listeningPointId: string;
+  entries: PlanEntryDto[];
+  unmet: { kind: string; shortDb: number; detail: string; sections: string[] }[];
+  sets: { setId: string; number: string; before: MixSummary; after: MixSummary }[];
+};
