@@ -291,3 +291,23 @@ export const analyses = pgTable(
 );
 export type Analysis = typeof analyses.$inferSelect;
 
+
+// Stored transition sweeps: the box levels and failing checks at every count into a set, reused
+// while the hash of their inputs (both sets' positions, the voicing, conditions, catalog, targets) is unchanged.
+export const balanceSweeps = pgTable(
+  "balance_sweeps",
+  {
+    setId: uuid("set_id")
+      .notNull()
+      .references(() => sets.id, { onDelete: "cascade" }),
+    listeningPointId: uuid("listening_point_id")
+      .notNull()
+      .references(() => listeningPoints.id, { onDelete: "cascade" }),
+    inputsHash: text("inputs_hash").notNull(),
+    modelVersion: text("model_version").notNull(),
+    result: jsonb("result").notNull(),
+    computedAt: timestamp("computed_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  },
+  (t) => [primaryKey({ columns: [t.setId, t.listeningPointId] })],
+);
+export type BalanceSweep = typeof balanceSweeps.$inferSelect;
