@@ -1,0 +1,72 @@
+// The selected performer (or group): who, where in metres and in the trade's words, and what reaches the box.
+import type { Performer } from "@/components/api-types";
+import { humanize, metres, signedDb } from "@/components/format";
+import { VOICE_STYLES } from "@/components/field/palette";
+import type { VoiceOrTacet } from "@/lib/acoustics/types";
+import type { Spot } from "@/lib/editor/layout";
+import type { FieldRules } from "@/lib/field/geometry";
+import { describePosition } from "@/lib/field/words";
+
+const facingWords = (deg: number) => {
+  const d = Math.round(deg) % 360;
+  const named: Record<number, string> = { 0: "front", 90: "side 2", 180: "back", 270: "side 1" };
+  return named[d] ? `${d}° (${named[d]})` : `${d}°`;
+};
+
+export function SelectionPanel(props: {
+  performers: Performer[];
+  spot: Spot | null;
+  voice: VoiceOrTacet | null;
+  contributionDbA: number | undefined;
+  pointName: string;
+  rules: FieldRules;
+  count: number;
+}) {
+  const { performers, spot, count } = props;
+  if (count === 0) {
+    return <p className="text-sm text-ink-soft">Select a performer on the field to see where they stand and what they add at the box. Drag on empty field to select a group.</p>;
+  }
+  if (count > 1) return <p className="font-semibold" data-testid="selection-count">{count} performers selected</p>;
+  const p = performers[0];
+  if (!p) return null;
+  const words = spot ? describePosition(spot.x, spot.y, props.rules) : null;
+  return (
+    <div data-testid="selection" data-performer={p.id}>
+      <h3 className="text-lg font-semibold">
+        {p.label} <span className="font-normal text-ink-soft">{humanize(p.instrument)}</span>
+      </h3>
+      <dl className="mt-1 grid grid-cols-[6.5rem_1fr] gap-x-2 gap-y-0.5 text-sm">
+        <dt className="text-ink-soft">Section</dt>
+        <dd>
+          {p.section}
+          {p.part ? ` · ${p.part}` : ""}
+        </dd>
+        <dt className="text-ink-soft">Voice</dt>
+        <dd>{props.voice ? VOICE_STYLES[props.voice].name : "—"}</dd>
+        <dt className="text-ink-soft">Strength</dt>
+        <dd>{signedDb(p.strengthDb)}</dd>
+        {spot && words ? (
+          <>
+            <dt className="text-ink-soft">Facing</dt>
+            <dd>{facingWords(spot.facingDeg)}</dd>
+            <dt className="text-ink-soft">Position</dt>
+            <dd data-testid="selection-metres" data-x={spot.x} data-y={spot.y}>
+              x {metres(spot.x)}, y {metres(spot.y)}
+            </dd>
+            <dt className="text-ink-soft">In steps</dt>
+            <dd data-testid="selection-words">{words.text}</dd>
+            <dt className="text-ink-soft">At {props.pointName}</dt>
+            <dd className="font-semibold tabular-nums" data-testid="selection-contribution" data-db={props.contributionDbA ?? ""}>
+              {props.contributionDbA !== undefined && Number.isFinite(props.contributionDbA) ? `${props.contributionDbA.toFixed(1)} dBA` : "not sounding"}
+            </dd>
+          </>
+        ) : (
+          <>
+            <dt className="text-ink-soft">Position</dt>
+            <dd>Not placed in this set</dd>
+          </>
+        )}
+      </dl>
+    </div>
+  );
+}

@@ -1,0 +1,425 @@
+"use client";
+// The field editor of one set: the field with its performers, the box mix, the selection, the roster,
+// the sets strip and the editing commands. Designers and directors edit; staff read.
+import { useRouter } from "next/navigation";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+import { flushSync } from "react-dom";
+import { mutate } from "swr";
+import { Breadcrumbs } from "@/components/Breadcrumbs";
+import { ErrorState } from "@/components/ErrorState";
+import { SkeletonCard } from "@/components/Skeleton";
+import { sendJson } from "@/components/fetcher";
+import { useApi } from "@/components/use-api";
+import { FieldCanvas } from "@/components/field/FieldCanvas";
+import { Legend } from "@/components/field/Legend";
+import { MixPanel, type MixFigures } from "@/components/field/MixPanel";
+import { FAMILY_SHAPES, VOICE_STYLES } from "@/components/field/palette";
+import type { StageDot } from "@/components/field/FieldStage";
+import { DEFAULT_INSTRUMENTS, positionsAtCount } from "@/lib/acoustics";
+import type { InstrumentCatalog, VoiceOrTacet } from "@/lib/acoustics/types";
+import { can } from "@/lib/auth/permissions";
+import { copyFrom, face, fillBlock, mirrorSides, moveBy, nudge, snapToGrid, spreadAlongArc, spreadAlongLine, type Changes } from "@/lib/editor/forms";
+import { canRedo, canUndo, commit, historyOf, redo, undo, type History } from "@/lib/editor/history";
+import { layoutOf, rowsOf, withSpots, type Layout } from "@/lib/editor/layout";
+import { clickSelect, bandSelect } from "@/lib/editor/selection";
+import { EditTools, type FormCommand } from "./EditTools";
+import { editorKeys, useSet, useShow, type AnalysisResponse, type MixInputResponse } from "./editor-api";
+import { RosterPanel } from "./RosterPanel";
+import { SelectionPanel } from "./SelectionPanel";
+import { SetsBar } from "./SetsBar";
+import { usePreview, type PreviewMix } from "./use-preview";
+import { useSetSaver } from "./use-set-saver";
+
+declare global {
+  interface Window {
+    /** Test and bench hook: read-only views of the editor's state. */
+    __farfieldEditor?: {
+      version(): number | null;
+      layout(): Layout;
+      previewMix(): PreviewMix | null;
+      storedMix(): AnalysisResponse | null;
+      frameTimes: number[];
+    };
+  }
+}
+
+const EMPTY: Layout = {};
+
+export function SetEditor({ showId, setId }: { showId: string; setId: string }) {
+  const router = useRouter();
+  const show = useShow(showId);
+  const setData = useSet(showId, setId);
+  const sets = show.data?.sets ?? [];
+  const index = sets.findIndex((s) => s.id === setId);
+  const previousId = index > 0 ? sets[index - 1].id : null;
+  const previous = useSet(showId, previousId);
+  const mixInput = useApi<MixInputResponse>(editorKeys.mixInput(showId, setId));
+  const editable = show.data ? can(show.data.role, "edit-drill") : false;
+
+  const [history, setHistory] = useState<History<Layout>>(() => historyOf(EMPTY));
+  const layout = history.present;
+  const [selected, setSelected] = useState<string[]>([]);
+  const [pointId, setPointId] = useState<string | null>(null);
+  const [placingId, setPlacingId] = useState<string | null>(null);
+  const [snap, setSnap] = useState(false);
+  const [showGrid, setShowGrid] = useState(false);
+  const [dragMix, setDragMix] = useState<PreviewMix | null>(null);
+  const [playCount, setPlayCount] = useState<number | null>(null);
+  const frameTimes = useRef<number[]>([]);
+
+  const listeningPoints = show.data?.listeningPoints ?? [];
+  const lpId = pointId ?? listeningPoints.find((l) => l.name === "Press box")?.id ?? listeningPoints[0]?.id ?? null;
+  const point = listeningPoints.find((l) => l.id === lpId);
+
+  const saver = useSetSaver({
+    showId,
+    setId,
+    present: layout,
+    enabled: editable,
+    onSaved: () => {
+      void mutate(editorKeys.mixInput(showId, setId));
+    },
+    onTheirs: (theirs) => setHistory((h) => commit(h, theirs)),
+  });
+
+  // First load, and a newer version read while we have nothing unsaved.
+  useEffect(() => {
+    const d = setData.data;
+    if (!d) return;
+    if (!saver.server) {
+      const l = layoutOf(d.positions);
+      saver.adopt(l, d.set.version);
+      setHistory(historyOf(l));
+    } else if (d.set.version > saver.server.version && !saver.dirty && !saver.busy() && !saver.conflict) {
+      const l = layoutOf(d.positions);
+      saver.adopt(l, d.set.version);
+      setHistory((h) => commit(h, l));
+    }
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [setData.data]);
+
+  const version = saver.server?.version ?? null;
+  const analysis = useApi<AnalysisResponse>(lpId && version !== null ? editorKeys.analysis(showId, setId, lpId, version) : null);
+  const input = mixInput.data?.input;
+  const preview = usePreview(input, lpId, layout);
+
+  // Transition playback: positions of the count being shown (between the previous set and this one).
+  const counts = sets[index]?.counts ?? 0;
+  const playLayout = useMemo(() => {
+    if (playCount === null || !previous.data) return null;
+    return layoutOf(positionsAtCount(previous.data.positions, rowsOf(layout), playCount, Math.max(1, counts)));
+  }, [playCount, previous.data, layout, counts]);
+  const shown = playLayout ?? layout;
+
+  const previewMix = useMemo(() => (preview ? preview.mixFor(shown) : null), [preview, shown]);
+  const stored = analysis.data && !saver.dirty && playCount === null && mixInput.data && !mixInput.isValidating ? analysis.data : null;
+  const mix: MixFigures | null = dragMix ?? (stored ? stored.mix : previewMix);
+  const perPerformer: Record<string, number> = useMemo(() => {
+    if (dragMix) return dragMix.performers;
+    if (stored) return Object.fromEntries(stored.mix.performers.flatMap((p) => (p.dbA === null ? [] : [[p.performerId, p.dbA]])));
+    return previewMix?.performers ?? {};
+  }, [dragMix, stored, previewMix]);
+  const loudest = useMemo(() => Math.max(-Infinity, ...Object.values(perPerformer).filter(Number.isFinite)), [perPerformer]);
+  const relDb = useMemo(() => Object.fromEntries(Object.entries(perPerformer).map(([id, db]) => [id, db - loudest])), [perPerformer, loudest]);
+
+  useEffect(() => {
+    window.__farfieldEditor = {
+      version: () => version,
+      layout: () => layout,
+      previewMix: () => (preview ? preview.mixFor(layout) : null),
+      storedMix: () => analysis.data ?? null,
+      frameTimes: frameTimes.current,
+    };
+  });
+
+  const performers = show.data?.performers ?? [];
+  const byId = useMemo(() => new Map(performers.map((p) => [p.id, p])), [performers]);
+  const voiceOf = useMemo(() => new Map((input?.performers ?? []).map((p) => [p.id, p.voice as VoiceOrTacet])), [input]);
+  const catalog: InstrumentCatalog = useMemo(() => ({ ...DEFAULT_INSTRUMENTS, ...(input?.instruments ?? {}) }), [input]);
+
+  const dots: StageDot[] = useMemo(
+    () =>
+      Object.entries(shown).flatMap(([id, s]) => {
+        const p = byId.get(id);
+        if (!p) return [];
+        const family = catalog[p.instrument]?.family ?? "woodwind";
+        return [{ id, label: p.label, shape: FAMILY_SHAPES[family].shape, style: VOICE_STYLES[voiceOf.get(id) ?? "tacet"], x: s.x, y: s.y, facingDeg: s.facingDeg }];
+      }),
+    [shown, byId, catalog, voiceOf],
+  );
+  const ghosts = useMemo(() => (previous.data && playCount === null ? previous.data.positions.map((p) => ({ id: p.performerId, x: p.x, y: p.y })) : []), [previous.data, playCount]);
+
+  const apply = useCallback(
+    (changes: Changes | Record<string, undefined>) => {
+      if (!editable || Object.keys(changes).length === 0) return;
+      setHistory((h) => commit(h, withSpots(h.present, changes)));
+    },
+    [editable],
+  );
+
+  const selectedSet = useMemo(() => new Set(selected), [selected]);
+  const onForm = (cmd: FormCommand) => {
+    const prev = previous.data ? layoutOf(previous.data.positions) : EMPTY;
+    const fn = { line: spreadAlongLine, arc: spreadAlongArc, mirror: mirrorSides, snap: snapToGrid, "copy-previous": (_: Layout, ids: readonly string[]) => copyFrom(prev, ids) }[cmd];
+    apply(fn(layout, selected));
+  };
+  const removeSelected = () => apply(Object.fromEntries(selected.map((id) => [id, undefined])));
+
+  // Keyboard: arrows nudge one step (shift: four), Delete takes off the set, Ctrl+Z / Ctrl+Shift+Z, Ctrl+A, Esc.
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      const t = e.target as HTMLElement | null;
+      if (t && (t.tagName === "INPUT" || t.tagName === "TEXTAREA" || t.tagName === "SELECT" || t.isContentEditable)) return;
+      const mod = e.ctrlKey || e.metaKey;
+      const step = e.shiftKey ? 4 : 1;
+      const arrows: Record<string, [number, number]> = { ArrowLeft: [-step, 0], ArrowRight: [step, 0], ArrowUp: [0, step], ArrowDown: [0, -step] };
+      if (arrows[e.key] && selected.length && editable) {
+        e.preventDefault();
+        apply(nudge(layout, selected, ...arrows[e.key]));
+      } else if ((e.key === "Delete" || e.key === "Backspace") && selected.length && editable) {
+        e.preventDefault();
+        removeSelected();
+      } else if (mod && e.key.toLowerCase() === "z") {
+        e.preventDefault();
+        if (editable) setHistory((h) => (e.shiftKey ? redo(h) : undo(h)));
+      } else if (mod && e.key.toLowerCase() === "y") {
+        e.preventDefault();
+        if (editable) setHistory(redo);
+      } else if (mod && e.key.toLowerCase() === "a") {
+        e.preventDefault();
+        setSelected(Object.keys(layout));
+      } else if (e.key === "Escape") {
+        setPlacingId(null);
+        setSelected([]);
+      }
+    };
+    window.addEventListener("keydown", onKey);
+    return () => window.removeEventListener("keydown", onKey);
+  });
+
+  // Transition playback: one count every half second (120 beats a minute).
+  useEffect(() => {
+    if (playCount === null) return;
+    if (playCount >= counts) {
+      const t = setTimeout(() => setPlayCount(null), 900);
+      return () => clearTimeout(t);
+    }
+    const t = setTimeout(() => setPlayCount((c) => (c === null ? null : c + 1)), 500);
+    return () => clearTimeout(t);
+  }, [playCount, counts]);
+
+  if (show.error) return <ErrorState error={show.error} what="show" onRetry={() => show.mutate()} />;
+  if (setData.error) return <ErrorState error={setData.error} what="set" onRetry={() => setData.mutate()} />;
+  if (!show.data || !setData.data) return <SkeletonCard rows={6} label="Loading the set…" />;
+
+  const current = sets[index];
+  const unplaced = performers.filter((p) => !layout[p.id]);
+  const selPerformers = selected.map((id) => byId.get(id)).filter((p): p is NonNullable<typeof p> => Boolean(p));
+  const one = selected.length === 1 ? selected[0] : null;
+  const setPath = editorKeys.set(showId, setId);
+  const afterSetChange = async () => {
+    await mutate(editorKeys.show(showId));
+  };
+
+  return (
+    <div className="flex flex-col gap-3">
+      <Breadcrumbs items={[{ label: "Programs", href: "/programs" }, { label: show.data.show.name, href: `/shows/${showId}` }, { label: `Set ${current?.number ?? setData.data.set.number}` }]} />
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <h1 className="text-2xl font-bold">
+          Set {current?.number ?? setData.data.set.number} <span className="text-base font-normal text-ink-soft">{counts} counts from the previous set</span>
+        </h1>
+        <div className="flex items-center gap-3 text-sm">
+          {listeningPoints.length > 1 ? (
+            <label>
+              Listening point{" "}
+              <select className="min-h-9 rounded-md border border-ink/20 bg-paper-raised px-2" value={lpId ?? ""} onChange={(e) => setPointId(e.target.value)}>
+                {listeningPoints.map((l) => (
+                  <option key={l.id} value={l.id}>
+                    {l.name}
+                  </option>
+                ))}
+              </select>
+            </label>
+          ) : null}
+          <span aria-live="polite" data-testid="save-status" data-status={saver.dirty ? "unsaved" : saver.status}>
+            {saver.status === "error" ? "Not saved" : saver.dirty || saver.status === "saving" ? "Saving…" : editable ? "All changes saved" : null}
+          </span>
+        </div>
+      </div>
+
+      {saver.error ? (
+        <div role="alert" className="rounded-lg border border-signal-bad/40 bg-[#fbe9ea] p-3 text-sm">
+          Your last change was not saved: {saver.error}{" "}
+          <button type="button" className="font-semibold underline" onClick={saver.retry}>
+            Try again
+          </button>
+        </div>
+      ) : null}
+      {saver.conflict ? (
+        <div role="alert" className="rounded-lg border border-signal-warn/50 bg-[#fff3d6] p-3 text-sm" data-testid="conflict">
+          <p className="font-semibold">Someone else changed this set while you were editing.</p>
+          <p>
+            The field now shows their version. Your unsaved change ({saver.conflict.mine.upserts.length} moved or placed, {saver.conflict.mine.removals.length} taken off) is kept: re-apply it on top of theirs, or discard it.
+          </p>
+          <div className="mt-2 flex gap-2">
+            <button
+              type="button"
+              className="min-h-9 rounded-md border border-turf-dark bg-turf px-3 font-semibold text-white"
+              onClick={() => {
+                const c = saver.conflict!;
+                const changes: Record<string, { x: number; y: number; facingDeg: number } | undefined> = Object.fromEntries(c.mine.upserts.map((r) => [r.performerId, { x: r.x, y: r.y, facingDeg: r.facingDeg }]));
+                for (const id of c.mine.removals) changes[id] = undefined;
+                saver.closeConflict();
+                setHistory((h) => commit(h, withSpots(c.theirs, changes)));
+              }}
+            >
+              Re-apply my change
+            </button>
+            <button type="button" className="min-h-9 rounded-md border border-ink/20 bg-paper-raised px-3 font-semibold" onClick={saver.closeConflict}>
+              Discard mine, keep theirs
+            </button>
+          </div>
+        </div>
+      ) : null}
+
+      <SetsBar
+        showId={showId}
+        sets={sets}
+        currentId={setId}
+        editable={editable}
+        onAdd={async () => {
+          const r = await sendJson<{ set: { id: string } }>(editorKeys.sets(showId), "POST", { after: setId });
+          await afterSetChange();
+          router.push(`/shows/${showId}/sets/${r!.set.id}`);
+        }}
+        onDuplicate={async () => {
+          const r = await sendJson<{ set: { id: string } }>(editorKeys.sets(showId), "POST", { duplicateOf: setId });
+          await afterSetChange();
+          router.push(`/shows/${showId}/sets/${r!.set.id}`);
+        }}
+        onRenumber={async (number) => {
+          const r = await sendJson<{ set: { version: number } }>(setPath, "PATCH", { version, number });
+          saver.setVersion(r!.set.version);
+          await afterSetChange();
+        }}
+        onCounts={async (c) => {
+          const r = await sendJson<{ set: { version: number } }>(setPath, "PATCH", { version, counts: c });
+          saver.setVersion(r!.set.version);
+          await afterSetChange();
+        }}
+        onDelete={async () => {
+          await sendJson(`${setPath}?version=${version}`, "DELETE");
+          await afterSetChange();
+          const next = sets[index + 1] ?? sets[index - 1];
+          router.push(next ? `/shows/${showId}/sets/${next.id}` : `/shows/${showId}`);
+        }}
+      />
+
+      <EditTools
+        editable={editable}
+        selectionSize={selected.length}
+        canUndo={canUndo(history)}
+        canRedo={canRedo(history)}
+        hasPrevious={Boolean(previous.data)}
+        snap={snap}
+        showGrid={showGrid}
+        onUndo={() => setHistory(undo)}
+        onRedo={() => setHistory(redo)}
+        onFace={(deg) => apply(face(layout, selected, deg))}
+        onRemove={removeSelected}
+        onForm={onForm}
+        onBlock={(columns, intervalSteps) => apply(fillBlock(layout, selected, { columns, intervalSteps }))}
+        onSnap={setSnap}
+        onGrid={setShowGrid}
+      />
+
+      <div className="grid gap-3 lg:grid-cols-[minmax(0,1fr)_20rem]">
+        <div className="flex min-w-0 flex-col gap-2">
+          <div className="h-[min(62vh,560px)] min-h-[320px]">
+            <FieldCanvas
+              rules={show.data.show.fieldRules}
+              dots={dots}
+              ghosts={ghosts}
+              selected={selectedSet}
+              relDb={relDb}
+              listeningPoints={listeningPoints}
+              selectedPointId={lpId}
+              editable={editable && playCount === null}
+              showGrid={showGrid}
+              snap={snap}
+              placing={Boolean(placingId)}
+              onSelect={(ids, mode, additive) => setSelected((cur) => (mode === "click" ? clickSelect(cur, ids[0], additive) : bandSelect(cur, ids, additive)))}
+              onDragFrame={(moved) => {
+                if (!preview) return;
+                const m = preview.mixFor(layout, moved);
+                flushSync(() => setDragMix(m));
+                const top = Math.max(...Object.values(m.performers).filter(Number.isFinite));
+                return Object.fromEntries(moved.map((p) => [p.performerId, (m.performers[p.performerId] ?? -Infinity) - top]));
+              }}
+              onDragEnd={(ids, dx, dy) => {
+                setDragMix(null);
+                apply(moveBy(layout, ids, dx, dy));
+              }}
+              onPlace={(x, y) => {
+                if (!placingId) return;
+                apply({ [placingId]: { x, y, facingDeg: 0 } });
+                setSelected([placingId]);
+                // Keep placing: the next unplaced performer follows (Esc stops).
+                setPlacingId(unplaced.find((p) => p.id !== placingId)?.id ?? null);
+              }}
+              onFrameTime={(ms) => {
+                frameTimes.current.push(ms);
+                if (frameTimes.current.length > 5000) frameTimes.current.splice(0, 1000);
+              }}
+            />
+          </div>
+          <Legend />
+          {previous.data ? (
+            <div className="flex flex-wrap items-center gap-2 text-sm">
+              <span className="text-ink-soft">Set {sets[index - 1]?.number} shown faintly, with each performer&apos;s path.</span>
+              <button
+                type="button"
+                className="min-h-9 rounded-md border border-ink/20 bg-paper-raised px-3 font-semibold hover:bg-paper-sunk"
+                onClick={() => setPlayCount(playCount === null ? 0 : null)}
+                data-testid="play-transition"
+              >
+                {playCount === null ? `Play the ${counts} counts from set ${sets[index - 1]?.number}` : "Stop"}
+              </button>
+              {playCount !== null ? (
+                <span className="font-semibold tabular-nums" aria-live="polite">
+                  Count {playCount} of {counts}
+                </span>
+              ) : null}
+            </div>
+          ) : null}
+        </div>
+        <aside className="flex flex-col gap-3">
+          <MixPanel mix={mix} source={!mix ? "loading" : stored && !dragMix ? "stored" : "preview"} pointName={point?.name ?? "the listening point"} computedAt={stored?.computedAt} />
+          <div className="rounded-xl border border-ink/10 bg-paper-raised p-4 shadow-sm">
+            <SelectionPanel
+              performers={selPerformers}
+              count={selected.length}
+              spot={one ? (shown[one] ?? null) : null}
+              voice={one ? (voiceOf.get(one) ?? null) : null}
+              contributionDbA={one ? perPerformer[one] : undefined}
+              pointName={point?.name ?? "the box"}
+              rules={show.data.show.fieldRules}
+            />
+          </div>
+          <div className="rounded-xl border border-ink/10 bg-paper-raised p-4 shadow-sm">
+            <RosterPanel
+              unplaced={unplaced}
+              placingId={placingId}
+              editable={editable}
+              onPlace={setPlacingId}
+              onAdd={async (instrument, count) => {
+                await sendJson(editorKeys.performers(showId), "POST", { instrument, count });
+                await mutate(editorKeys.show(showId));
+              }}
+            />
+          </div>
+        </aside>
+      </div>
+    </div>
+  );
+}
