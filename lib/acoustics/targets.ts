@@ -25,6 +25,8 @@ export interface BalanceTargets {
   arrivalSpreadMs: number;
   /** The plan: sections doubling one voice stay within this of each other at the box (dB). */
   blendToleranceDb: number;
+  /** Set compare: a voice changing more than this from one set to the next is flagged (dB). */
+  setChangeDb: number;
 }
 
 /**
@@ -38,6 +40,7 @@ export interface BalanceTargets {
  * - arrivalSpreadMs 40: the precedence (Haas) effect, a second arrival within roughly 30–40 ms
  *   fuses with the first and later ones smear (from memory; Haas 1951).
  * - blendToleranceDb 6: common practice, no source.
+ * - setChangeDb 3: common practice, no source (the sound should not jump from one set to the next).
  */
 export const DEFAULT_TARGETS: Readonly<BalanceTargets> = Object.freeze({
   melodyLeadDb: 3,
@@ -49,6 +52,7 @@ export const DEFAULT_TARGETS: Readonly<BalanceTargets> = Object.freeze({
   standOutDb: 6,
   arrivalSpreadMs: 40,
   blendToleranceDb: 6,
+  setChangeDb: 3,
 });
 
 /** Bounds a director's value must respect (a threshold outside them is a typo, not a choice). */
@@ -61,6 +65,7 @@ export const TARGET_RANGES: Readonly<Record<Exclude<keyof BalanceTargets, "pyram
   standOutDb: [0, 30],
   arrivalSpreadMs: [1, 500],
   blendToleranceDb: [0, 30],
+  setChangeDb: [0, 30],
 });
 
 /** The defaults with a show's stored targets laid over them; throws on a value out of range. */

@@ -1,6 +1,6 @@
 // Everything the balance work needs about a whole show, read once: roster, music, listening
-// points, catalog, conditions, targets and every set with its positions.
-import "server-only";
+// points, catalog, conditions, targets and every set with its positions. (No "server-only" mark:
+// the bench loads it too.)
 import { currentCatalog } from "@/db/queries/catalog";
 import { loadMusic } from "@/db/queries/music";
 import { listShowPositions } from "@/db/queries/show-positions";
