@@ -21,6 +21,7 @@ const columns = {
   meterHeightM: boxReadings.meterHeightM,
   note: boxReadings.note,
   recordedBy: users.name,
+  recordedById: boxReadings.recordedBy,
   createdAt: boxReadings.createdAt,
 };
 

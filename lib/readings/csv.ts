@@ -3,9 +3,6 @@
 import Papa from "papaparse";
 import { readingSchema, type ReadingBody } from "@/lib/validation/readings";
 
-/** The columns, in the order of the template. */
-export const CSV_COLUMNS = ["set", "point", "takenAt", "temperatureC", "humidityPct", "sections", "measuredDb", "weighting", "response", "meterHeightM", "note"] as const;
-
 export interface CsvContext {
   sets: { id: string; number: string }[];
   listeningPoints: { id: string; name: string }[];

@@ -34,3 +34,6 @@ export type ReadingFormInput = z.input<typeof readingSchema>;
 export const MAX_CSV_ROWS = 500;
 /** Largest CSV accepted (bytes). */
 export const MAX_CSV_BYTES = 256 * 1024;
+
+/** The CSV columns, in the order of the template. */
+export const CSV_COLUMNS = ["set", "point", "takenAt", "temperatureC", "humidityPct", "sections", "measuredDb", "weighting", "response", "meterHeightM", "note"] as const;

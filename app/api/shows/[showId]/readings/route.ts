@@ -10,9 +10,9 @@ import { readingDto } from "./reading-dto";
 
 /** The show's box readings, newest first. */
 export const GET = route<{ showId: string }>(async (_req, { showId }) => {
-  await requireShow(showId, "read");
+  const { user } = await requireShow(showId, "read");
   const readings = await listReadings(showId);
-  return NextResponse.json({ readings: readings.map(readingDto) });
+  return NextResponse.json({ readings: readings.map((r) => readingDto(r, user.id)) });
 });
 
 /** Records one reading (staff and up). */
@@ -23,5 +23,5 @@ export const POST = route<{ showId: string }>(async (req, { showId }) => {
   if (Object.keys(issues).length) throw badRequest("The reading refers to something this show does not have.", issues);
   const [id] = await insertReadings([{ ...body, takenAt: new Date(body.takenAt), showId, recordedBy: user.id }]);
   const reading = await findReading(showId, id!);
-  return NextResponse.json({ reading: readingDto(reading!) }, { status: 201 });
+  return NextResponse.json({ reading: readingDto(reading!, user.id) }, { status: 201 });
 });

@@ -1,0 +1,54 @@
+"use client";
+// The program's catalog versions, newest (in force) first; a director may put an earlier one back.
+import { useState } from "react";
+import { Button } from "@/components/Button";
+import { ApiError, sendJson } from "@/components/fetcher";
+import { FormMessage } from "@/components/FormMessage";
+import type { ApiState } from "@/components/use-api";
+import type { CatalogResponse } from "./readings-types";
+
+const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
+
+export function CatalogHistory({ programId, catalog, canRestore, onChanged }: { programId: string; catalog: ApiState<CatalogResponse>; canRestore: boolean; onChanged: () => Promise<unknown> }) {
+  const [message, setMessage] = useState<{ tone: "info" | "bad"; text: string } | null>(null);
+  if (catalog.error) return <p className="text-signal-bad">{catalog.error.message}</p>;
+  if (!catalog.data) return <p className="text-ink-soft">Loading the catalog history…</p>;
+  const { currentVersion, versions } = catalog.data;
+
+  async function restore(version: number) {
+    try {
+      const res = await sendJson<{ version: number }>(`/api/programs/${programId}/catalog/restore`, "POST", { version, baseVersion: currentVersion });
+      setMessage({ tone: "info", text: `Version ${version} is back in force as version ${res!.version}.` });
+      await onChanged();
+    } catch (err) {
+      setMessage({ tone: "bad", text: err instanceof ApiError ? err.message : "The version could not be restored." });
+    }
+  }
+
+  return (
+    <div className="space-y-3">
+      <p className="text-ink-soft">The catalog holds each instrument&apos;s sound power and outdoor carry. Every change is a new version; nothing is overwritten.</p>
+      <ol className="divide-y divide-ink/10 rounded-lg border border-ink/10">
+        {versions.map((v) => (
+          <li key={v.version} className="flex flex-wrap items-center justify-between gap-3 px-3 py-2">
+            <div>
+              <span className="font-semibold">Version {v.version}</span>
+              {v.version === currentVersion ? <span className="ml-2 rounded bg-turf-light px-2 py-0.5 text-sm font-semibold text-turf-dark">in force</span> : null}
+              <div className="text-ink-soft">{v.note || "No note"}</div>
+              <div className="text-sm text-ink-soft">
+                {when(v.createdAt)}
+                {v.createdBy ? ` · ${v.createdBy}` : ""}
+              </div>
+            </div>
+            {canRestore && v.version !== currentVersion ? (
+              <Button variant="secondary" onClick={() => restore(v.version)}>
+                Restore version {v.version}
+              </Button>
+            ) : null}
+          </li>
+        ))}
+      </ol>
+      <FormMessage id="history-status" tone={message?.tone ?? "info"}>{message?.text ?? ""}</FormMessage>
+    </div>
+  );
+}
