@@ -160,10 +160,15 @@ function median(values: number[]): number {
   return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2;
 }
 
-/** stand-outs: no performer far above the median of the rest of its section at the box. */
+/**
+ * stand-outs: no performer far above the median of the rest of its section at the box. Players are
+ * compared with those of the same instrument in the section (a synth is not a marimba that stands out):
+ * what is caught is closeness, a strong player or a facing.
+ */
 function standOuts(players: BoxPlayer[], t: BalanceTargets): CheckResult {
   const flagged: { id: string; section: string; excess: number }[] = [];
-  for (const [section, list] of groupBy(players, (p) => p.section)) {
+  for (const list of groupBy(players, (p) => `${p.section}\u0000${p.instrument}`).values()) {
+    const section = list[0]!.section;
     if (list.length < 2) continue;
     list.forEach((p, i) => {
       const rest = list.filter((_, j) => j !== i).map((q) => q.dbA);

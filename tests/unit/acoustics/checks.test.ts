@@ -146,6 +146,11 @@ describe("stand-outs (6 dB above the median of the rest of the section: common p
     expect(c.performerIds).toEqual(["S2"]);
   });
 
+  it("compares players with the same instrument of their section: a louder instrument is not a stand-out", () => {
+    const band = [...section(0), at({ id: "CY", x: 0, y: 10, instrument: "cymbals" })];
+    expect(check(band, "stand-outs").passed).toBe(true);
+  });
+
   it("flags a player much closer to the box than the rest", () => {
     const band = [at({ id: "N", x: 0, y: 0 }), at({ id: "A", x: 0, y: 40 }), at({ id: "B", x: 2, y: 40 }), at({ id: "C", x: 4, y: 40 })];
     expect(check(band, "stand-outs").performerIds).toEqual(["N"]);
