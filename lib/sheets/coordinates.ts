@@ -1,0 +1,72 @@
+// Coordinate sheets: per performer every set with its counts and position in the trade's words;
+// per set every dot. Built from a show file, so sheets and backups read the same data. Pure.
+import { describePosition } from "@/lib/field/words";
+import { facingWords } from "@/lib/imports/facing";
+import type { ShowFile } from "@/lib/show-file/schema";
+
+export interface SheetDot {
+  label: string;
+  x: number;
+  y: number;
+  facingDeg: number;
+  /** "side 1: 2 steps outside the 35 yard line" */
+  sideToSide: string;
+  /** "4 steps in front of the front hash" */
+  frontToBack: string;
+  facing: string;
+}
+
+export interface PerformerSheet {
+  label: string;
+  name: string | null;
+  instrument: string;
+  section: string;
+  part: string;
+  rows: ({ set: string; counts: number } & Omit<SheetDot, "label">)[];
+}
+
+export interface SetSheet {
+  number: string;
+  counts: number;
+  dots: SheetDot[];
+}
+
+function dot(label: string, p: { x: number; y: number; facingDeg: number }, rules: ShowFile["show"]["fieldRules"]): SheetDot {
+  const d = describePosition(p.x, p.y, rules);
+  return {
+    label,
+    x: p.x,
+    y: p.y,
+    facingDeg: p.facingDeg,
+    sideToSide: d.side ? `side ${d.side}: ${d.sideToSide}` : d.sideToSide,
+    frontToBack: d.frontToBack,
+    facing: facingWords(p.facingDeg),
+  };
+}
+
+/** Labels in the order a band lists them: letters, then the number (T2 before T10). */
+export const byLabel = (a: { label: string }, b: { label: string }) => a.label.localeCompare(b.label, "en", { numeric: true });
+
+export function performerSheets(file: ShowFile): PerformerSheet[] {
+  return [...file.performers].sort(byLabel).map((p) => ({
+    label: p.label,
+    name: p.name,
+    instrument: p.instrument,
+    section: p.section,
+    part: p.part,
+    rows: file.sets.flatMap((s) => {
+      const at = s.positions.find((q) => q.label === p.label);
+      if (!at) return [];
+      const { label: _l, ...rest } = dot(p.label, at, file.show.fieldRules);
+      return [{ set: s.number, counts: s.counts, ...rest }];
+    }),
+  }));
+}
+
+export function setSheets(file: ShowFile): SetSheet[] {
+  return file.sets.map((s) => ({
+    number: s.number,
+    counts: s.counts,
+    dots: s.positions.map((p) => dot(p.label, p, file.show.fieldRules)).sort(byLabel),
+  }));
+}
