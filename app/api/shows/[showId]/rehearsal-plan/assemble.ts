@@ -1,0 +1,62 @@
+// Gathers the stored analyses of every set the chosen phrases or sets span, and builds the plan.
+import "server-only";
+import { loadMusic } from "@/db/queries/music";
+import { findProgram } from "@/db/queries/programs";
+import { listListeningPoints, listSets } from "@/db/queries/shows";
+import type { Show } from "@/db/schema";
+import { storedAnalysis } from "@/lib/analysis/stored-analysis";
+import { describePosition } from "@/lib/field/words";
+import { badRequest } from "@/lib/http/errors";
+import { buildRehearsalPlan, type RehearsalItemInput, type SetAnalysis } from "@/lib/rehearsal/plan";
+import { UNASSIGNED, phraseAt } from "@/lib/music/voicing";
+import type { RehearsalChoice } from "@/lib/validation/rehearsal";
+
+export async function assembleRehearsalPlan(show: Show, choice: RehearsalChoice) {
+  const [sets, music, points, program] = await Promise.all([listSets(show.id), loadMusic(show.id), listListeningPoints(show.id), findProgram(show.programId)]);
+  const point = choice.listeningPointId ? points.find((p) => p.id === choice.listeningPointId) : (points.find((p) => p.name === "Press box") ?? points[0]);
+  if (!point) throw badRequest("This show has no such listening point.", { listeningPointId: ["Choose one of the show's listening points."] });
+  const unknown = [...choice.phraseIds.filter((id) => !music.phrases.some((p) => p.id === id)), ...choice.setIds.filter((id) => !sets.some((s) => s.id === id))];
+  if (unknown.length) throw badRequest("Some chosen phrases or sets are not in this show.", { phraseIds: unknown.map((id) => `unknown id ${id}`) });
+
+  const cache = new Map<string, SetAnalysis>();
+  const analysisOf = async (set: (typeof sets)[number]) => {
+    if (!cache.has(set.id)) {
+      const { result } = await storedAnalysis(show, set, point.id);
+      cache.set(set.id, { setNumber: set.number, checks: result.checks, plan: result.plan, planUnmet: result.planUnmet });
+    }
+    return cache.get(set.id)!;
+  };
+  const sectionsOf = (phraseId: string | null) => {
+    const names = [...new Set(music.assignments.filter((a) => a.phraseId === phraseId).map((a) => a.section))];
+    return names.map((section) => {
+      const a = music.assignments.find((x) => x.phraseId === phraseId && x.section === section)!;
+      return { section, voice: a.voice, writtenDynamic: a.writtenDynamic, playedDynamic: a.playedDynamic };
+    });
+  };
+
+  const items: RehearsalItemInput[] = [];
+  for (const phrase of music.phrases.filter((p) => choice.phraseIds.includes(p.id))) {
+    const span = sets.filter((s) => s.order >= phrase.firstOrder && s.order <= phrase.lastOrder);
+    items.push({ kind: "phrase", name: phrase.name, sets: await Promise.all(span.map(analysisOf)), sections: sectionsOf(phrase.id) });
+  }
+  for (const set of sets.filter((s) => choice.setIds.includes(s.id))) {
+    const phrase = phraseAt(music.phrases, set.order);
+    const sections = sectionsOf(phrase?.id ?? null);
+    items.push({
+      kind: "set",
+      name: `Set ${set.number}${phrase ? ` (in ${phrase.name})` : ""}`,
+      sets: [await analysisOf(set)],
+      sections: sections.length ? sections : [],
+    });
+  }
+  const where = describePosition(point.x, point.y, show.fieldRules);
+  return {
+    programName: program?.name ?? "",
+    show: { id: show.id, name: show.name },
+    listenFrom: { id: point.id, name: point.name, x: point.x, y: point.y, z: point.z, words: `${where.text}; ${point.z.toFixed(0)} m up` },
+    items: buildRehearsalPlan(items),
+    unassigned: UNASSIGNED,
+  };
+}
+
+export type AssembledPlan = Awaited<ReturnType<typeof assembleRehearsalPlan>>;

@@ -1,0 +1,49 @@
+// The stadium rehearsal plan as a message to the staff. Pure.
+import type { RehearsalItem } from "@/lib/rehearsal/plan";
+import { escapeHtml, layout, linkButton, paragraphs } from "./html";
+import { absoluteLink, type MailMessage } from "./message";
+
+export interface RehearsalMessageInput {
+  baseUrl: string;
+  path: string;
+  programName: string;
+  showName: string;
+  senderName: string;
+  listenFrom: { name: string; words: string };
+  items: RehearsalItem[];
+}
+
+const SOURCE_WORDS = { adopted: "adopted plan", proposed: "proposed", written: "as written" } as const;
+
+function itemText(it: RehearsalItem, n: number): string {
+  const lines = [`${n}. ${it.name} (sets ${it.sets.join(", ")})`];
+  lines.push(it.failing.length ? `   Failing: ${it.failing.map((f) => `${f.id} (sets ${f.sets.join(", ")})`).join("; ")}` : "   Every balance check passes.");
+  for (const s of it.buildUp) lines.push(`   Step ${s.step}, ${s.title.toLowerCase()}: ${s.sections.join(", ")}`);
+  for (const d of it.dynamics) lines.push(`   ${d.section}: written ${d.written}, play ${d.play} (${SOURCE_WORDS[d.source]})`);
+  return lines.join("\n");
+}
+
+function itemHtml(it: RehearsalItem, n: number): string {
+  const steps = it.buildUp.map((s) => `<li>${escapeHtml(s.title)}: ${escapeHtml(s.sections.join(", "))}</li>`).join("");
+  const dyn = it.dynamics
+    .map((d) => `<tr><td style="padding:2px 8px 2px 0">${escapeHtml(d.section)}</td><td style="padding:2px 8px">${d.written}</td><td style="padding:2px 8px"><strong>${d.play}</strong></td><td style="padding:2px 0;color:#6b7280">${SOURCE_WORDS[d.source]}</td></tr>`)
+    .join("");
+  const failing = it.failing.length ? it.failing.map((f) => `${escapeHtml(f.id)} (sets ${escapeHtml(f.sets.join(", "))})`).join("; ") : "every balance check passes";
+  return `<h3 style="margin:18px 0 6px;font-size:16px">${n}. ${escapeHtml(it.name)}</h3>
+<p style="margin:0 0 6px;color:#6b7280">Sets ${escapeHtml(it.sets.join(", "))} · failing: ${failing}</p>
+<ol style="margin:0 0 8px 18px;padding:0">${steps}</ol>
+<table style="border-collapse:collapse;font-size:14px"><tr><th align="left">Section</th><th align="left" style="padding:0 8px">Written</th><th align="left" style="padding:0 8px">Play</th><th></th></tr>${dyn}</table>`;
+}
+
+export function rehearsalMessage(input: RehearsalMessageInput): MailMessage {
+  const link = absoluteLink(input.baseUrl, input.path);
+  const subject = `Stadium rehearsal plan: ${input.showName}`;
+  const intro = `${input.senderName} sent the stadium rehearsal plan for ${input.showName} (${input.programName}). Listen from the ${input.listenFrom.name}: ${input.listenFrom.words}. Work through the phrases in this order; in each, build up from the melody alone.`;
+  const caution = "Levels are predictions, not measurements. Wear musicians' hearing protection near loud sections and follow your school's and venue's rules.";
+  const text = [intro, "", ...input.items.map((it, i) => itemText(it, i + 1) + "\n"), `The plan, printable: ${link}`, "", caution].join("\n");
+  const html = layout(
+    subject,
+    paragraphs([escapeHtml(intro)]) + input.items.map((it, i) => itemHtml(it, i + 1)).join("\n") + linkButton(link, "Open the printable plan") + paragraphs([escapeHtml(caution)]),
+  );
+  return { subject, text, html };
+}

@@ -1,0 +1,122 @@
+// The stadium rehearsal plan: the chosen phrases (or sets) ordered by how badly their balance
+// fails at the listening point, each with its build-up order, failing checks, the dynamics to play
+// and where to listen from. Pure: the route hands it the stored analyses of every set involved.
+import type { CheckId, Dynamic, VoiceOrTacet } from "@/lib/acoustics/types";
+
+export interface SetAnalysis {
+  setNumber: string;
+  checks: { id: CheckId; passed: boolean; detail: string }[];
+  /** Numbers are null where the stored JSON had no finite value. */
+  plan: { section: string; writtenDynamic: Dynamic; playedDynamic: Dynamic; changeDb: number | null }[];
+  planUnmet: { shortDb: number | null; detail: string }[];
+}
+
+export interface RehearsalItemInput {
+  kind: "phrase" | "set";
+  name: string;
+  /** Sets the item spans, in show order. */
+  sets: SetAnalysis[];
+  /** Each section's voice in the item (its phrase), with the adopted played dynamic if any. */
+  sections: { section: string; voice: VoiceOrTacet; writtenDynamic: Dynamic; playedDynamic: Dynamic | null }[];
+}
+
+export interface BuildUpStep {
+  step: number;
+  /** "Melody alone", "Add the countermelody", "Add accompaniment and bass". */
+  title: string;
+  sections: string[];
+}
+
+export interface DynamicLine {
+  section: string;
+  voice: VoiceOrTacet;
+  written: Dynamic;
+  play: Dynamic;
+  /** adopted: the director's adopted plan; proposed: the balance plan of the worst set; written: no change needed. */
+  source: "adopted" | "proposed" | "written";
+  changeDb: number | null;
+}
+
+export interface RehearsalItem {
+  kind: "phrase" | "set";
+  name: string;
+  sets: string[];
+  severity: number;
+  failing: { id: CheckId; sets: string[]; detail: string }[];
+  buildUp: BuildUpStep[];
+  dynamics: DynamicLine[];
+  unmet: string[];
+}
+
+const STEPS: { title: string; voices: VoiceOrTacet[] }[] = [
+  { title: "Melody alone", voices: ["melody"] },
+  { title: "Add the countermelody", voices: ["countermelody"] },
+  { title: "Add accompaniment and bass", voices: ["accompaniment", "bass"] },
+  { title: "Add percussion: full ensemble", voices: ["percussion"] },
+];
+
+/**
+ * How badly an item fails: every failed check in every set counts 1, every dB a section must move
+ * counts 1/6 (about one dynamic step), every dB a target stays short counts 1/3. Per set, so long
+ * phrases do not win by length alone. (Our own weighting: common practice, no source.)
+ */
+export function severityOf(sets: SetAnalysis[]): number {
+  if (!sets.length) return 0;
+  const total = sets.reduce(
+    (sum, s) =>
+      sum +
+      s.checks.filter((c) => !c.passed).length +
+      s.plan.reduce((a, p) => a + Math.abs(p.changeDb ?? 0), 0) / 6 +
+      s.planUnmet.reduce((a, u) => a + (u.shortDb ?? 0), 0) / 3,
+    0,
+  );
+  return Math.round((total / sets.length) * 100) / 100;
+}
+
+function worstSet(sets: SetAnalysis[]): SetAnalysis | undefined {
+  return [...sets].sort((a, b) => severityOf([b]) - severityOf([a]))[0];
+}
+
+export function buildItem(input: RehearsalItemInput): RehearsalItem {
+  const failing = new Map<CheckId, { id: CheckId; sets: string[]; detail: string }>();
+  for (const s of input.sets) {
+    for (const c of s.checks) {
+      if (c.passed) continue;
+      const f = failing.get(c.id) ?? { id: c.id, sets: [], detail: c.detail };
+      f.sets.push(s.setNumber);
+      failing.set(c.id, f);
+    }
+  }
+  const sounding = input.sections.filter((s) => s.voice !== "tacet");
+  const buildUp = STEPS.map((st) => ({ title: st.title, sections: sounding.filter((s) => st.voices.includes(s.voice)).map((s) => s.section).sort() }))
+    .filter((st) => st.sections.length)
+    .map((st, i) => ({ step: i + 1, ...st }));
+  const proposed = new Map((worstSet(input.sets)?.plan ?? []).map((p) => [p.section, p]));
+  const order: VoiceOrTacet[] = ["melody", "countermelody", "accompaniment", "bass", "percussion"];
+  const dynamics = sounding
+    .map((s): DynamicLine => {
+      if (s.playedDynamic) return { section: s.section, voice: s.voice, written: s.writtenDynamic, play: s.playedDynamic, source: "adopted", changeDb: null };
+      const p = proposed.get(s.section);
+      if (p && p.playedDynamic !== s.writtenDynamic) return { section: s.section, voice: s.voice, written: s.writtenDynamic, play: p.playedDynamic, source: "proposed", changeDb: p.changeDb };
+      return { section: s.section, voice: s.voice, written: s.writtenDynamic, play: s.writtenDynamic, source: "written", changeDb: null };
+    })
+    .sort((a, b) => order.indexOf(a.voice) - order.indexOf(b.voice) || a.section.localeCompare(b.section));
+  return {
+    kind: input.kind,
+    name: input.name,
+    sets: input.sets.map((s) => s.setNumber),
+    severity: severityOf(input.sets),
+    failing: [...failing.values()],
+    buildUp,
+    dynamics,
+    unmet: [...new Set(input.sets.flatMap((s) => s.planUnmet.map((u) => u.detail)))],
+  };
+}
+
+/** The items, worst first; ties keep the order they were chosen in. */
+export function buildRehearsalPlan(items: RehearsalItemInput[]): RehearsalItem[] {
+  return items
+    .map((it, i) => ({ it: buildItem(it), i }))
+    .sort((a, b) => b.it.severity - a.it.severity || a.i - b.i)
+    .map((x) => x.it);
+}
