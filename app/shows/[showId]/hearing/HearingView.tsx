@@ -4,6 +4,7 @@
 import { useState } from "react";
 import type { ProgramResponse, ShowResponse } from "@/components/api-types";
 import { Breadcrumbs } from "@/components/Breadcrumbs";
+import { Button } from "@/components/Button";
 import { Card } from "@/components/Card";
 import { ErrorState } from "@/components/ErrorState";
 import { PageTitle } from "@/components/PageTitle";
@@ -14,6 +15,7 @@ import { HearingCautions } from "./HearingCautions";
 import { HearingField } from "./HearingField";
 import { LEVEL_STEPS, levelStep, type HearingPerformer, type HearingResponse } from "./hearing-types";
 
+const TOP = 15;
 const SELECT = "mt-1 block min-h-12 w-full rounded-lg border border-ink/30 bg-paper-raised px-3 text-lg text-ink";
 const pct = (dose: number) => `${Math.round(dose * 100)} %`;
 const minutes = (m: number | null) => (m === null ? "no limit" : m >= 600 ? "over 10 h" : m >= 60 ? `${Math.floor(m / 60)} h ${Math.round(m % 60)} min` : `${Math.round(m)} min`);
@@ -26,6 +28,7 @@ export function HearingView({ showId }: { showId: string }) {
   const [length, setLength] = useState("120");
   const [standard, setStandard] = useState<"niosh" | "osha">("niosh");
   const [selectedId, setSelectedId] = useState<string | null>(null);
+  const [showAll, setShowAll] = useState(false);
   const chosenSet = setId ?? show.data?.sets[0]?.id ?? null;
   const rehearsal = Number(length) > 0 && Number(length) <= 1440 ? Number(length) : 120;
   const map = useApi<HearingResponse>(chosenSet ? `/api/shows/${encodeURIComponent(showId)}/sets/${encodeURIComponent(chosenSet)}/hearing?minutes=${rehearsal}` : null);
@@ -80,7 +83,7 @@ export function HearingView({ showId }: { showId: string }) {
               <input id="hearing-minutes" inputMode="numeric" className={SELECT} value={length} onChange={(e) => setLength(e.target.value)} />
             </div>
             <fieldset>
-              <legend className="font-semibold">Ring the players over</legend>
+              <legend className="font-semibold">Outline players over the</legend>
               <div className="mt-1 flex min-h-12 items-center gap-4">
                 {(["niosh", "osha"] as const).map((s) => (
                   <label key={s} className="flex min-h-11 items-center gap-2">
@@ -107,8 +110,8 @@ export function HearingView({ showId }: { showId: string }) {
                   </span>
                 ))}
                 <span className="flex items-center gap-1.5">
-                  <span aria-hidden="true" className="inline-block h-5 w-5 rounded-full border-2 border-ink" />
-                  dose over 100 % ({standard === "niosh" ? "NIOSH" : "OSHA"}) in {rehearsal} min
+                  <span aria-hidden="true" className="inline-block h-4 w-4 rounded-full border-[3px] border-ink bg-paper" />
+                  dark outline: dose over 100 % ({standard === "niosh" ? "NIOSH" : "OSHA"}) in {rehearsal} min
                 </span>
               </div>
               <p className="mt-3 text-ink" aria-live="polite">
@@ -123,7 +126,18 @@ export function HearingView({ showId }: { showId: string }) {
         </Card>
         {map.data ? (
           <Card title="Most exposed first" titleId="exposed-title">
-            <SortableTable caption="Players by the estimated level at their ears" columns={columns} rows={performers} rowKey={(p) => p.performerId} initialSort="dbA" />
+            <SortableTable
+              caption="Players by the estimated level at their ears"
+              columns={columns}
+              rows={showAll ? performers : [...performers].sort((a, b) => (b.dbA ?? -Infinity) - (a.dbA ?? -Infinity)).slice(0, TOP)}
+              rowKey={(p) => p.performerId}
+              initialSort="dbA"
+            />
+            {performers.length > TOP ? (
+              <Button variant="secondary" className="mt-3" onClick={() => setShowAll(!showAll)}>
+                {showAll ? `Show the ${TOP} most exposed` : `Show all ${performers.length} players`}
+              </Button>
+            ) : null}
           </Card>
         ) : null}
       </div>

@@ -54,7 +54,7 @@ export function CsvUpload({ showId, onStored }: { showId: string; onStored: () =
         One reading a row with the columns <code className="text-sm">{CSV_COLUMNS.join(", ")}</code>. Sets by number, points by name, sections as <code className="text-sm">Trumpets: f; Tubas: ff</code>.
       </p>
       <label htmlFor="readings-file" className="block font-semibold">CSV file</label>
-      <input id="readings-file" type="file" accept=".csv,text/csv" className="block min-h-11 w-full" onChange={(e) => choose(e.target.files?.[0])} />
+      <input id="readings-file" type="file" accept=".csv,text/csv" className="block min-h-11 w-full text-ink file:mr-3 file:min-h-11 file:rounded-lg file:border file:border-ink/30 file:bg-paper-raised file:px-4 file:font-semibold hover:file:bg-paper-sunk" onChange={(e) => choose(e.target.files?.[0])} />
       {preview ? (
         <div className="space-y-2">
           <p>

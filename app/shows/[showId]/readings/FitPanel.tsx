@@ -12,11 +12,14 @@ import type { FitInstrument, FitResponse, Reading } from "./readings-types";
 const db1 = (x: number) => (Math.round(x * 10) / 10).toFixed(1);
 const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
 
+/** Beyond this a carry change is more likely a recording slip than the instrument (common practice, no source). */
+const LARGE_CHANGE_DB = 10;
+
 /** Plain words for a standard error (common practice, no source: about a meter's own ±1 dB is "well"). */
 function pinned(i: FitInstrument): string {
   if (i.stdErrorDb <= 1.5) return "well";
   if (i.stdErrorDb <= 3) return "roughly";
-  return "hardly: kept near 0";
+  return "poorly";
 }
 
 type Props = {
@@ -136,12 +139,15 @@ export function FitPanel({ showId, programId, readings, fit, canAdopt, onChanged
                 <span className="text-ink-soft">
                   (carry {signedDb(i.carryDb)} → {signedDb(i.carryDb + i.offsetDb)}; ±{db1(i.stdErrorDb)} dB from {i.readings} reading{i.readings === 1 ? "" : "s"}, pinned {pinned(i)})
                 </span>
+                {Math.abs(i.offsetDb) > LARGE_CHANGE_DB ? (
+                  <span className="block text-sm text-signal-warn">A change this large often means a mistyped reading, the wrong weighting, or a section playing louder than written: check before adopting.</span>
+                ) : null}
               </li>
             ))}
           </ul>
           {f.indistinguishable.length ? (
             <p className="mt-3 rounded-lg border border-signal-warn/40 bg-paper px-3 py-2 text-signal-warn">
-              The readings cannot tell {f.indistinguishable.map(([a, b]) => `${f.instruments.find((i) => i.key === a)?.name ?? a} from ${f.instruments.find((i) => i.key === b)?.name ?? b}`).join("; ")}: they were always heard together. Take a reading with one of them alone.
+              The readings cannot tell {f.indistinguishable.map(([a, b]) => `${f.instruments.find((i) => i.key === a)?.name ?? a} from ${f.instruments.find((i) => i.key === b)?.name ?? b}`).join("; ")}: they were always heard together in the same proportion, so the fit can only split the change between them. A reading with one of them alone, or with the two in a different balance, separates them.
             </p>
           ) : null}
         </div>
