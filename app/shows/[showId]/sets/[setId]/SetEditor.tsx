@@ -149,10 +149,14 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
   );
   const ghosts = useMemo(() => (previous.data && playCount === null ? previous.data.positions.map((p) => ({ id: p.performerId, x: p.x, y: p.y })) : []), [previous.data, playCount]);
 
+  /** One edit: changes computed from the latest layout (key repeats never work on a stale one). */
   const apply = useCallback(
-    (changes: Changes | Record<string, undefined>) => {
-      if (!editable || Object.keys(changes).length === 0) return;
-      setHistory((h) => commit(h, withSpots(h.present, changes)));
+    (changes: Changes | Record<string, undefined> | ((l: Layout) => Changes | Record<string, undefined>)) => {
+      if (!editable) return;
+      setHistory((h) => {
+        const c = typeof changes === "function" ? changes(h.present) : changes;
+        return Object.keys(c).length === 0 ? h : commit(h, withSpots(h.present, c));
+      });
     },
     [editable],
   );
@@ -161,7 +165,7 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
   const onForm = (cmd: FormCommand) => {
     const prev = previous.data ? layoutOf(previous.data.positions) : EMPTY;
     const fn = { line: spreadAlongLine, arc: spreadAlongArc, mirror: mirrorSides, snap: snapToGrid, "copy-previous": (_: Layout, ids: readonly string[]) => copyFrom(prev, ids) }[cmd];
-    apply(fn(layout, selected));
+    apply((l) => fn(l, selected));
   };
   const removeSelected = () => apply(Object.fromEntries(selected.map((id) => [id, undefined])));
 
@@ -175,7 +179,7 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
       const arrows: Record<string, [number, number]> = { ArrowLeft: [-step, 0], ArrowRight: [step, 0], ArrowUp: [0, step], ArrowDown: [0, -step] };
       if (arrows[e.key] && selected.length && editable) {
         e.preventDefault();
-        apply(nudge(layout, selected, ...arrows[e.key]));
+        apply((l) => nudge(l, selected, ...arrows[e.key]));
       } else if ((e.key === "Delete" || e.key === "Backspace") && selected.length && editable) {
         e.preventDefault();
         removeSelected();
@@ -325,10 +329,10 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
         showGrid={showGrid}
         onUndo={() => setHistory(undo)}
         onRedo={() => setHistory(redo)}
-        onFace={(deg) => apply(face(layout, selected, deg))}
+        onFace={(deg) => apply((l) => face(l, selected, deg))}
         onRemove={removeSelected}
         onForm={onForm}
-        onBlock={(columns, intervalSteps) => apply(fillBlock(layout, selected, { columns, intervalSteps }))}
+        onBlock={(columns, intervalSteps) => apply((l) => fillBlock(l, selected, { columns, intervalSteps }))}
         onSnap={setSnap}
         onGrid={setShowGrid}
       />
@@ -358,7 +362,7 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
               }}
               onDragEnd={(ids, dx, dy) => {
                 setDragMix(null);
-                apply(moveBy(layout, ids, dx, dy));
+                apply((l) => moveBy(l, ids, dx, dy));
               }}
               onPlace={(x, y) => {
                 if (!placingId) return;

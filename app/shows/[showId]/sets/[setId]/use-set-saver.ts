@@ -10,7 +10,7 @@ import { editorKeys, type SetResponse } from "./editor-api";
 export interface Conflict {
   theirs: Layout;
   theirVersion: number;
-  /** Our unsaved change, as it would turn their layout into ours. */
+  /** Our unsaved change: what we changed since the version we last read. */
   mine: ReturnType<typeof diffLayouts>;
 }
 
@@ -47,7 +47,7 @@ export function useSetSaver(args: { showId: string; setId: string; present: Layo
           const theirs = await fetcher<SetResponse>(editorKeys.set(showId, setId)).catch(() => null);
           if (theirs) {
             const theirLayout = layoutOf(theirs.positions);
-            setConflict({ theirs: theirLayout, theirVersion: theirs.set.version, mine: diffLayouts(theirLayout, target) });
+            setConflict({ theirs: theirLayout, theirVersion: theirs.set.version, mine: diffLayouts(base.layout, target) });
             setServer({ layout: theirLayout, version: theirs.set.version });
             callbacks.current.onTheirs(theirLayout);
             setStatus("saved");

@@ -1,0 +1,170 @@
+// The field editor in headless Chromium: a designer drags a performer away from the box and the
+// box mix follows; staff cannot move anything; two sessions on one set get a conflict and lose
+// nothing; the browser preview agrees with the server's stored analysis. Screenshots go to .tmp/shots.
+import { mkdirSync } from "node:fs";
+import path from "node:path";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { DEMO, demoIds } from "../support/api";
+import { launchBrowser, signIn, type BrowserSession } from "../support/browser";
+import { drag, editorState, isolated, openSet, screenOf, waitForStoredMix, waitSaved } from "./editor-support";
+
+const SHOTS = path.resolve(__dirname, "../../.tmp/shots");
+let ids: Awaited<ReturnType<typeof demoIds>>;
+const sessions: BrowserSession[] = [];
+const open = async (email: string, size?: { width: number; height: number }) => {
+  const s = await launchBrowser(size);
+  sessions.push(s);
+  await signIn(s.page, email);
+  return s;
+};
+const lps = () => ids.show.listeningPoints as { x: number; y: number }[];
+
+beforeAll(async () => {
+  ids = await demoIds();
+  mkdirSync(SHOTS, { recursive: true });
+});
+
+afterAll(async () => {
+  for (const s of sessions) await s.close();
+});
+
+const num = async (page: BrowserSession["page"], selector: string) => Number(await page.locator(selector).getAttribute("data-db"));
+
+describe("field editor", () => {
+  it("a designer drags a performer away from the box: its contribution and its voice's level fall, and the move is kept", async () => {
+    const { page, problems } = await open(DEMO.designer);
+    const setId = ids.setIds[8];
+    await openSet(page, ids.showId, setId);
+    const before = await editorState(page);
+    // A sounding player (melody if one stands clear) in front of the back hash, clear of the others.
+    const free = new Set(isolated(before.layout));
+    const melody = before.stored!.mix.performers.filter((p) => free.has(p.performerId));
+    const input = await page.evaluate(async (url) => (await fetch(url)).json(), `/api/shows/${ids.showId}/sets/${setId}/mix-input`);
+    const voiceOf = new Map(input.input.performers.map((p: any) => [p.id, p.voice]));
+    const target = melody
+      .map((p) => ({ ...p, voice: voiceOf.get(p.performerId) as string, spot: before.layout[p.performerId] }))
+      .filter((p) => p.voice !== "tacet" && p.spot.y < 30)
+      .sort((a, b) => Number(b.voice === "melody") - Number(a.voice === "melody") || a.spot.y - b.spot.y)[0];
+    expect(target, "a sounding player in front of the back hash, clear of the others").toBeTruthy();
+    const voiceBar = `[data-testid="voice-${target.voice}"]`;
+    const from = await screenOf(page, lps(), target.spot.x, target.spot.y);
+    await page.mouse.click(from.x, from.y);
+    await expect.poll(() => page.locator('[data-testid="selection"]').getAttribute("data-performer")).toBe(target.performerId);
+    const contributionBefore = await num(page, '[data-testid="selection-contribution"]');
+    const voiceBefore = await num(page, voiceBar);
+    expect(contributionBefore).toBeCloseTo(target.dbA!, 6);
+    await page.screenshot({ path: path.join(SHOTS, "editor-laptop-selected.png") });
+
+    const to = await screenOf(page, lps(), target.spot.x, 47);
+    await drag(page, from, to);
+    await waitSaved(page);
+    await waitForStoredMix(page);
+    const contributionAfter = await num(page, '[data-testid="selection-contribution"]');
+    const voiceAfter = await num(page, voiceBar);
+    expect(contributionAfter).toBeLessThan(contributionBefore - 1);
+    expect(voiceAfter).toBeLessThan(voiceBefore);
+    expect(await page.locator('[data-testid="selection-words"]').textContent()).toMatch(/back sideline/);
+    await page.screenshot({ path: path.join(SHOTS, "editor-laptop-after-drag.png") });
+
+    await page.reload();
+    await waitForStoredMix(page);
+    const after = await editorState(page);
+    expect(after.layout[target.performerId].y).toBeCloseTo(47, 0);
+    expect(after.layout[target.performerId].x).toBeCloseTo(target.spot.x, 0);
+    expect(after.version).toBeGreaterThan(before.version!);
+    expect(problems).toEqual([]);
+  });
+
+  it("the browser preview and the server's stored analysis agree within 0.01 dB", async () => {
+    const { page } = await open(DEMO.director);
+    for (const i of [0, 6, 8]) {
+      await openSet(page, ids.showId, ids.setIds[i]);
+      const { preview, stored } = await editorState(page);
+      expect(preview && stored).toBeTruthy();
+      expect(Math.abs(preview!.totalDbA - stored!.mix.totalDbA)).toBeLessThan(0.01);
+      expect(Math.abs(preview!.arrivalSpreadMs - stored!.mix.arrivalSpreadMs)).toBeLessThan(0.01);
+      for (const [v, { dbA }] of Object.entries(stored!.mix.voices)) expect(Math.abs((preview!.voices as any)[v].dbA - dbA), v).toBeLessThan(0.01);
+      for (const [s, { dbA }] of Object.entries(stored!.mix.sections)) {
+        if (dbA !== null) expect(Math.abs(preview!.sections[s].dbA - dbA), s).toBeLessThan(0.01);
+      }
+      for (const p of stored!.mix.performers) if (p.dbA !== null) expect(Math.abs(preview!.performers[p.performerId] - p.dbA)).toBeLessThan(0.01);
+    }
+  });
+
+  it("staff see the set but cannot move anything, and no save is sent", async () => {
+    const { page, problems } = await open(DEMO.staff);
+    const setId = ids.setIds[7];
+    await openSet(page, ids.showId, setId);
+    expect(await page.locator('[data-testid="read-only"]').isVisible()).toBe(true);
+    expect(await page.locator('[data-testid="edit-tools"]').count()).toBe(0);
+    expect(await page.getByRole("button", { name: "Add set" }).count()).toBe(0);
+    const writes: string[] = [];
+    page.on("request", (r) => {
+      if (r.method() !== "GET") writes.push(`${r.method()} ${r.url()}`);
+    });
+    const before = await editorState(page);
+    const id = isolated(before.layout)[0];
+    const spot = before.layout[id];
+    const from = await screenOf(page, lps(), spot.x, spot.y);
+    await page.mouse.click(from.x, from.y);
+    await expect.poll(() => page.locator('[data-testid="selection"]').getAttribute("data-performer")).toBe(id);
+    await drag(page, from, { x: from.x + 120, y: from.y - 80 });
+    await page.keyboard.press("ArrowRight");
+    await page.keyboard.press("Delete");
+    await page.waitForTimeout(500);
+    const after = await editorState(page);
+    expect(after.layout).toEqual(before.layout);
+    expect(after.version).toBe(before.version);
+    expect(writes).toEqual([]);
+    await page.screenshot({ path: path.join(SHOTS, "editor-laptop-staff.png") });
+    expect(problems).toEqual([]);
+  });
+
+  it("two sessions on one set: the second save gets the conflict message, shows theirs, and re-applies its change", async () => {
+    const a = await open(DEMO.designer);
+    const b = await open(DEMO.director);
+    const setId = ids.setIds[9];
+    await openSet(a.page, ids.showId, setId);
+    await openSet(b.page, ids.showId, setId);
+    const start = await editorState(a.page);
+    const free = isolated(start.layout, 3).sort((p, q) => start.layout[p].x - start.layout[q].x);
+    const [idA, idB] = [free[0], free[free.length - 1]];
+    const [spotA, spotB] = [start.layout[idA], start.layout[idB]];
+
+    // A moves one performer with the keyboard (shift+arrow: four steps toward side 2) and saves.
+    const pa = await screenOf(a.page, lps(), spotA.x, spotA.y);
+    await a.page.mouse.click(pa.x, pa.y);
+    await a.page.keyboard.press("Shift+ArrowRight");
+    await expect.poll(async () => (await editorState(a.page)).version, { timeout: 30_000 }).toBe(start.version! + 1);
+    await waitSaved(a.page);
+
+    // B, still on the old version, moves another performer: 409.
+    const pb = await screenOf(b.page, lps(), spotB.x, spotB.y);
+    await b.page.mouse.click(pb.x, pb.y);
+    await b.page.keyboard.press("ArrowUp");
+    await b.page.waitForSelector('[data-testid="conflict"]', { timeout: 30_000 });
+    expect(await b.page.locator('[data-testid="conflict"]').textContent()).toContain("Someone else changed this set");
+    await b.page.screenshot({ path: path.join(SHOTS, "editor-laptop-conflict.png") });
+    const shown = await editorState(b.page);
+    expect(shown.layout[idA].x).toBeCloseTo(spotA.x + 4 * 0.5715, 6); // theirs is shown
+    expect(shown.layout[idB].y).toBeCloseTo(spotB.y, 6);
+
+    await b.page.getByRole("button", { name: "Re-apply my change" }).click();
+    await waitSaved(b.page);
+    const server = await b.page.evaluate(async (url) => (await fetch(url)).json(), `/api/shows/${ids.showId}/sets/${setId}`);
+    const at = (id: string) => server.positions.find((p: any) => p.performerId === id);
+    expect(at(idA).x).toBeCloseTo(spotA.x + 4 * 0.5715, 6); // A's change kept
+    expect(at(idB).y).toBeCloseTo(spotB.y + 0.5715, 6); // B's change re-applied, nothing lost
+    expect(server.set.version).toBe(start.version! + 2);
+  });
+
+  it("fits a tablet-size window (820 × 1180)", async () => {
+    const { page, problems } = await open(DEMO.designer, { width: 820, height: 1180 });
+    await openSet(page, ids.showId, ids.setIds[4]);
+    const box = (await page.locator('[data-testid="field-stage"]').boundingBox())!;
+    expect(box.width).toBeGreaterThan(700);
+    expect(box.x + box.width).toBeLessThanOrEqual(820);
+    await page.screenshot({ path: path.join(SHOTS, "editor-tablet.png"), fullPage: true });
+    expect(problems).toEqual([]);
+  });
+});
