@@ -30,5 +30,5 @@ export async function privateShowCopy() {
   const programId = signUp.body.programId as string;
   const imported = await uploadFile(director, `/api/programs/${programId}/shows/import`, { name: "show.json", content: JSON.stringify(exported.body), type: "application/json" });
   if (imported.status !== 201) throw new Error(`import answered ${imported.status}: ${JSON.stringify(imported.body)}`);
-  return { director, programId, showId: imported.body.show.id as string, original: exported.body, demo: ids };
+  return { director, email, password: "copy-director-pw", programId, showId: imported.body.show.id as string, original: exported.body, demo: ids };
 }
