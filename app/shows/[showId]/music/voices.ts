@@ -28,6 +28,6 @@ export const VOICE_ORDER = ["melody", "countermelody", "accompaniment", "bass", 
 
 export function formatDb(db: number | null | undefined, signed = false): string {
   if (db === null || db === undefined || !Number.isFinite(db)) return "—";
-  const s = db.toFixed(1);
+  const s = (Math.abs(db) < 0.05 ? 0 : db).toFixed(1);
   return signed && db > 0 ? `+${s}` : s;
 }

@@ -1,0 +1,97 @@
+"use client";
+// Set compare: two sets' fields and box mixes side by side, what changed per voice and section, and who changed most.
+import { useState } from "react";
+import type { ShowResponse } from "@/components/api-types";
+import { Breadcrumbs } from "@/components/Breadcrumbs";
+import { Card } from "@/components/Card";
+import { ErrorState } from "@/components/ErrorState";
+import { PageTitle } from "@/components/PageTitle";
+import { SkeletonCard } from "@/components/Skeleton";
+import { apiKeys, useApi } from "@/components/use-api";
+import { CHECK_LABELS, VOICE_LABELS, formatDb } from "../music/voices";
+import { MiniField } from "./MiniField";
+
+type Side = { set: { id: string; number: string }; mix: { totalDbA: number | null }; checks: { id: string; passed: boolean }[] };
+type CompareResponse = {
+  a: Side;
+  b: Side;
+  changes: {
+    totalChangeDb: number | null;
+    setChangeDb: number;
+    voices: { voice: string; aDbA: number | null; bDbA: number | null; changeDb: number | null; flagged: boolean }[];
+    sections: { section: string; aDbA: number | null; bDbA: number | null; changeDb: number | null }[];
+    performers: { performerId: string; label: string; section: string; aDbA: number | null; bDbA: number | null; changeDb: number | null }[];
+  };
+};
+type SetResponse = { positions: { performerId: string; x: number; y: number }[] };
+const sel = "min-h-11 rounded-lg border border-ink-soft/40 bg-paper-raised px-2";
+
+export function CompareView({ showId, initialA, initialB }: { showId: string; initialA: string | null; initialB: string | null }) {
+  const show = useApi<ShowResponse>(apiKeys.show(showId));
+  const sets = show.data?.sets ?? [];
+  const [a, setA] = useState<string | null>(initialA);
+  const [b, setB] = useState<string | null>(initialB);
+  const [point, setPoint] = useState<string | null>(null);
+  const aId = a ?? sets[0]?.id ?? null;
+  const bId = b ?? sets[sets.findIndex((s) => s.id === aId) + 1]?.id ?? null;
+  const lp = point ?? show.data?.listeningPoints[0]?.id ?? null;
+  const base = `/api/shows/${encodeURIComponent(showId)}`;
+  const cmp = useApi<CompareResponse>(aId && bId && lp ? `${base}/compare?a=${aId}&b=${bId}&listeningPointId=${lp}` : null);
+  const fieldA = useApi<SetResponse>(aId ? `${base}/sets/${aId}` : null);
+  const fieldB = useApi<SetResponse>(bId ? `${base}/sets/${bId}` : null);
+  const crumbs = [{ label: "Programs", href: "/programs" }, { label: show.data?.show.name ?? "Show", href: `/shows/${showId}` }, { label: "Set compare" }];
+  const error = show.error ?? cmp.error;
+  if (error) return (<><Breadcrumbs items={crumbs} /><ErrorState error={error} what="set" onRetry={() => cmp.mutate()} /></>);
+  if (!show.data) return <SkeletonCard rows={6} label="Loading the show…" />;
+  const c = cmp.data;
+  const changed = new Set((c?.changes.performers ?? []).slice(0, 5).map((p) => p.performerId));
+  return (
+    <>
+      <Breadcrumbs items={crumbs} />
+      <PageTitle sub="Two sets' predicted box mixes side by side. Predictions are estimates, not measurements.">Set compare</PageTitle>
+      <div className="mb-6 flex flex-wrap items-end gap-4">
+        <label className="flex flex-col text-sm">From set<select className={sel} value={aId ?? ""} onChange={(e) => { setA(e.target.value); setB(null); }}>{sets.map((s) => <option key={s.id} value={s.id}>{s.number}</option>)}</select></label>
+        <label className="flex flex-col text-sm">To set<select className={sel} value={bId ?? ""} onChange={(e) => setB(e.target.value)}>{sets.map((s) => <option key={s.id} value={s.id}>{s.number}</option>)}</select></label>
+        <label className="flex flex-col text-sm">Listening point<select className={sel} value={lp ?? ""} onChange={(e) => setPoint(e.target.value)}>{show.data.listeningPoints.map((l) => <option key={l.id} value={l.id}>{l.name}</option>)}</select></label>
+      </div>
+      {!c ? <SkeletonCard rows={6} label="Comparing…" /> : (
+        <div className="space-y-6">
+          <div className="grid gap-6 md:grid-cols-2">
+            {([c.a, c.b] as Side[]).map((side, i) => (
+              <Card key={side.set.id} title={`Set ${side.set.number}: ${formatDb(side.mix.totalDbA)} dBA`} titleId={`side-${i}`}>
+                <MiniField dots={(i === 0 ? fieldA : fieldB).data?.positions ?? []} highlight={changed} title={`Field at set ${side.set.number}; the players whose contribution changed most are larger and orange`} />
+                <ul className="mt-3 flex flex-wrap gap-2 text-sm">
+                  {side.checks.map((k) => <li key={k.id} className={`rounded px-2 py-1 ${k.passed ? "bg-turf-light text-signal-ok" : "bg-signal-bad text-white"}`}>{k.passed ? "✓" : "✗"} {CHECK_LABELS[k.id]}</li>)}
+                </ul>
+              </Card>
+            ))}
+          </div>
+          <Card title="Voices" titleId="voices-title">
+            <table className="w-full text-left">
+              <thead><tr className="border-b border-ink/15 text-sm text-ink-soft"><th className="py-2 pr-3">Voice</th><th className="py-2 pr-3">Set {c.a.set.number}</th><th className="py-2 pr-3">Set {c.b.set.number}</th><th className="py-2 pr-3">Change</th><th className="py-2">Flag</th></tr></thead>
+              <tbody>
+                {c.changes.voices.map((v) => (
+                  <tr key={v.voice} className="border-b border-ink/5">
+                    <th scope="row" className="py-1 pr-3 font-medium">{VOICE_LABELS[v.voice]}</th>
+                    <td className="py-1 pr-3 tabular-nums">{formatDb(v.aDbA)} dBA</td>
+                    <td className="py-1 pr-3 tabular-nums">{formatDb(v.bDbA)} dBA</td>
+                    <td className="py-1 pr-3 tabular-nums">{v.changeDb === null ? (v.aDbA === null ? "enters" : "leaves") : `${formatDb(v.changeDb, true)} dB`}</td>
+                    <td className="py-1">{v.flagged ? <span className="font-semibold text-signal-warn">Moves more than {c.changes.setChangeDb} dB</span> : "steady"}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </Card>
+          <div className="grid items-start gap-6 md:grid-cols-2">
+            <Card title="Sections" titleId="sections-title">
+              <ul className="space-y-1 text-sm">{c.changes.sections.map((s) => <li key={s.section} className="flex justify-between gap-3"><span>{s.section}</span><span className="tabular-nums">{formatDb(s.changeDb, true)} dB</span></li>)}</ul>
+            </Card>
+            <Card title="Players whose contribution changed most" titleId="players-title">
+              <ul className="space-y-1 text-sm">{c.changes.performers.map((p) => <li key={p.performerId} className="flex justify-between gap-3"><span><span className="font-semibold">{p.label}</span> {p.section}</span><span className="tabular-nums">{formatDb(p.aDbA)} → {formatDb(p.bDbA)} dBA ({formatDb(p.changeDb, true)} dB)</span></li>)}</ul>
+            </Card>
+          </div>
+        </div>
+      )}
+    </>
+  );
+}
