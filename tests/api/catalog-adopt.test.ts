@@ -8,6 +8,7 @@ let ids: Awaited<ReturnType<typeof demoIds>>;
 let staff: Client;
 let designer: Client;
 const created: string[] = [];
+let startVersion = 0;
 const catalog = () => `/api/programs/${ids.programId}/catalog`;
 const analysis = () => `/api/shows/${ids.showId}/sets/${ids.setIds[0]}/analysis?listeningPointId=${ids.pressBoxId}`;
 
@@ -15,6 +16,7 @@ beforeAll(async () => {
   ids = await demoIds();
   staff = await signedIn(DEMO.staff);
   designer = await signedIn(DEMO.designer);
+  startVersion = (await ids.director.get(`/api/programs/${ids.programId}/catalog`)).body.currentVersion;
   // An evening at the box: trumpets alone twice, tubas alone, both together.
   const bodies = [
     readingBody(ids, { sections: [{ section: "Trumpets", dynamic: "f" }], measuredDb: 78 }),
@@ -28,7 +30,12 @@ beforeAll(async () => {
     created.push(res.body.reading.id);
   }
 });
-afterAll(async () => removeReadings(ids.director, ids.showId, created));
+afterAll(async () => {
+  await removeReadings(ids.director, ids.showId, created);
+  // Put the catalog in force at the start back, should a test have stopped between adopt and restore.
+  const now = (await ids.director.get(catalog())).body.currentVersion;
+  if (now !== startVersion) await ids.director.post(`${catalog()}/restore`, { version: startVersion, baseVersion: now });
+});
 
 describe("catalog fit, adopt and restore", () => {
   it("previews predicted against measured before and after, changing only instruments the readings involve", async () => {
@@ -36,14 +43,18 @@ describe("catalog fit, adopt and restore", () => {
     expect(fit.status).toBe(200);
     const mine = fit.body.readings.filter((r: any) => created.includes(r.id));
     expect(mine).toHaveLength(4);
-    expect(Object.keys(fit.body.offsetsDb).sort()).toEqual(["trumpet", "tuba"]);
+    // Only instruments of sections some reading of the show names (other readings may exist besides ours).
+    const all = (await staff.get(`/api/shows/${ids.showId}/readings`)).body.readings;
+    const named = new Set(all.flatMap((r: any) => r.sections.map((s: any) => s.section)));
+    const involved = new Set(ids.show.performers.filter((p: any) => named.has(p.section)).map((p: any) => p.instrument));
+    expect(Object.keys(fit.body.offsetsDb)).toEqual(expect.arrayContaining(["trumpet", "tuba"]));
+    for (const k of Object.keys(fit.body.offsetsDb)) expect(involved.has(k), k).toBe(true);
     expect(fit.body.rmsAfterDb).toBeLessThan(fit.body.rmsBeforeDb);
-    for (const r of mine) expect(Math.abs(r.predictedAfterDb - r.measuredDb)).toBeLessThan(Math.abs(r.predictedBeforeDb - r.measuredDb) + 1e-9);
     // A section heard alone moves its instrument by about measured − predicted (Tikhonov shrinks it a little).
     const alone = mine.find((r: any) => r.sections.length === 1 && r.sections[0].section === "Tubas");
     expect(Math.abs(alone.predictedAfterDb - alone.measuredDb)).toBeLessThan(1.5);
-    expect(fit.body.instruments.map((i: any) => i.key)).toEqual(["trumpet", "tuba"]);
-    expect(fit.body.indistinguishable).toEqual([]);
+    expect(fit.body.instruments.map((i: any) => i.key)).toEqual(Object.keys(fit.body.offsetsDb).sort());
+    expect(fit.body.indistinguishable.flat()).not.toContain("tuba");
   });
 
   it("lets only a director adopt (403 for staff and designer, 404 for another program, 400 with no readings)", async () => {
@@ -65,6 +76,7 @@ describe("catalog fit, adopt and restore", () => {
     const settled = await ids.director.get(analysis());
     expect(settled.body.reused).toBe(true);
     const totalBefore = settled.body.mix.totalDbA as number;
+    const trumpetsBefore = settled.body.mix.sections.Trumpets.dbA as number;
 
     expect((await ids.director.post(`${catalog()}/adopt`, { baseVersion: base - 1 })).status).toBe(409);
     const fit = (await ids.director.get(`${catalog()}/fit?showId=${ids.showId}`)).body;
@@ -76,14 +88,16 @@ describe("catalog fit, adopt and restore", () => {
     const after = (await staff.get(catalog())).body;
     expect(after.currentVersion).toBe(base + 1);
     expect(after.versions[0].note).toMatch(/Fit to \d+ box readings/);
-    expect(after.versions[0].carryDb.trumpet).toBeCloseTo(carry0.trumpet + fit.offsetsDb.trumpet, 9);
-    expect(after.versions[0].carryDb.tuba).toBeCloseTo(carry0.tuba + fit.offsetsDb.tuba, 9);
-    for (const k of Object.keys(carry0)) if (k !== "trumpet" && k !== "tuba") expect(after.versions[0].carryDb[k]).toBe(carry0[k]);
+    for (const k of Object.keys(carry0)) {
+      if (k in fit.offsetsDb) expect(after.versions[0].carryDb[k], k).toBeCloseTo(carry0[k] + fit.offsetsDb[k], 9);
+      else expect(after.versions[0].carryDb[k], k).toBe(carry0[k]); // never touched: no reading involves it
+    }
 
     const recomputed = await ids.director.get(analysis());
     expect(recomputed.status).toBe(200);
     expect(recomputed.body.reused).toBe(false);
-    expect(recomputed.body.mix.totalDbA).not.toBeCloseTo(totalBefore, 3);
+    // Carry is a plain dB offset on every trumpet, so the Trumpets section at the box moves by exactly the change.
+    expect(recomputed.body.mix.sections.Trumpets.dbA - trumpetsBefore).toBeCloseTo(fit.offsetsDb.trumpet, 6);
     // The same readings refitted from the adopted catalog need (almost) nothing more.
     const refit = (await ids.director.get(`${catalog()}/fit?showId=${ids.showId}`)).body;
     expect(refit.baseVersion).toBe(base + 1);
@@ -101,6 +115,7 @@ describe("catalog fit, adopt and restore", () => {
     const back = await ids.director.get(analysis());
     expect(back.body.reused).toBe(false);
     expect(back.body.mix.totalDbA).toBeCloseTo(totalBefore, 9);
+    expect(back.body.mix.sections.Trumpets.dbA).toBeCloseTo(trumpetsBefore, 9);
   });
 
   it("lists versions to every member and to no one else", async () => {

@@ -22,13 +22,14 @@ export const POST = route<{ programId: string }>(async (req, { programId }) => {
   if (pf.baseVersion !== body.baseVersion) throw conflict("The catalog changed since you looked at the fit.", { currentVersion: pf.baseVersion });
   const offsetsDb = roundedOffsets(pf.fit);
   const changes = Object.entries(offsetsDb)
+    .filter(([, d]) => Math.abs(d) >= 0.05)
     .map(([k, d]) => `${pf.catalog[k]!.name} ${d >= 0 ? "+" : "−"}${Math.abs(d).toFixed(1)} dB`)
     .join(", ");
   const result = await addCatalogVersion({
     programId,
     baseVersion: body.baseVersion,
     instruments: adoptedCatalog(pf),
-    note: `Fit to ${pf.used.length} box reading${pf.used.length === 1 ? "" : "s"}: ${changes}`,
+    note: `Fit to ${pf.used.length} box reading${pf.used.length === 1 ? "" : "s"}: ${changes || "no change"}`,
     userId: user.id,
   });
   if (!result.ok) throw conflict("The catalog changed since you looked at the fit.", { currentVersion: result.currentVersion });

@@ -18,7 +18,7 @@ export const POST = route<{ programId: string }>(async (req, { programId }) => {
     programId,
     baseVersion: body.baseVersion,
     instruments: old.instruments,
-    note: `Restored version ${old.version}${old.note ? ` (${old.note})` : ""}`,
+    note: `Restored version ${old.version}`,
     userId: user.id,
   });
   if (!result.ok) throw conflict("The catalog changed since you looked at it.", { currentVersion: result.currentVersion });
