@@ -75,6 +75,8 @@ const RULES: Record<string, Rule> = {
   "GET shows/[showId]/imports/[uploadId]": { roles: ALL },
   "GET shows/[showId]/imports/[uploadId]/file": { roles: ALL },
   "POST shows/[showId]/imports/[uploadId]/confirm": { roles: EDITORS, body: "none" },
+  "GET shows/[showId]/rehearsal-plan": { roles: ALL },
+  "POST shows/[showId]/rehearsal-plan": { roles: ALL, body: "json" },
   "GET shows/[showId]/sheets": { roles: ALL },
   "GET shows/[showId]/sheets/pdf": { roles: ALL },
   "GET shows/[showId]/sheets/roster.csv": { roles: ALL },
