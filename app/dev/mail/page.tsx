@@ -1,0 +1,19 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { PageShell } from "@/components/PageShell";
+import { requireSignedIn } from "@/components/require-session";
+import { mailboxEnabled } from "@/lib/auth/mailbox-access";
+import { MailboxView } from "./MailboxView";
+
+export const metadata: Metadata = { title: "Local mailbox" };
+
+/** The messages the local fake SMTP server kept; the API decides who may read them. */
+export default async function MailboxPage() {
+  if (!mailboxEnabled()) notFound();
+  const user = await requireSignedIn("/dev/mail");
+  return (
+    <PageShell userName={user.name}>
+      <MailboxView />
+    </PageShell>
+  );
+}

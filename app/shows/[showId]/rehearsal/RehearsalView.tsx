@@ -1,0 +1,237 @@
+"use client";
+// The stadium rehearsal plan: choose phrases or sets, read them worst balance first with the build-up,
+// failing checks, dynamics to play and where to listen from; print it or e-mail it to staff.
+import { useEffect, useState } from "react";
+import { Breadcrumbs } from "@/components/Breadcrumbs";
+import { Button } from "@/components/Button";
+import { Card } from "@/components/Card";
+import { ErrorState } from "@/components/ErrorState";
+import { ApiError, sendJson } from "@/components/fetcher";
+import { FormMessage } from "@/components/FormMessage";
+import { PageTitle } from "@/components/PageTitle";
+import { ROLE_WORDS } from "@/components/RoleBadge";
+import { useApi } from "@/components/use-api";
+import type { Role } from "@/lib/auth/permissions";
+import type { RehearsalItem } from "@/lib/rehearsal/plan";
+
+type Options = {
+  show: { id: string; name: string };
+  phrases: { id: string; name: string; firstSet: string; lastSet: string }[];
+  sets: { id: string; number: string; counts: number }[];
+  listeningPoints: { id: string; name: string }[];
+  canSend: boolean;
+  members: { userId: string; name: string; email: string; role: Role }[];
+};
+type Plan = { programName: string; listenFrom: { name: string; words: string }; items: RehearsalItem[] };
+
+const CHECK_WORDS: Record<string, string> = {
+  "melody-forward": "Melody forward",
+  "bass-up-pyramid": "Bass-up pyramid",
+  "depth-support": "Depth support",
+  "wide-form-edges": "Wide-form edges",
+  "stand-outs": "Stand-outs",
+  "arrival-spread": "Arrival spread",
+};
+const SOURCE_WORDS = { adopted: "adopted plan", proposed: "proposed", written: "as written" } as const;
+
+export function RehearsalView({ showId, initial }: { showId: string; initial: { phraseIds: string[]; setIds: string[]; pointId: string | null } }) {
+  const options = useApi<Options>(`/api/shows/${showId}/rehearsal-plan`);
+  const [phraseIds, setPhraseIds] = useState<string[]>(initial.phraseIds);
+  const [setIds, setSetIds] = useState<string[]>(initial.setIds);
+  const [pointId, setPointId] = useState<string | null>(initial.pointId);
+  const [plan, setPlan] = useState<Plan | null>(null);
+  const [status, setStatus] = useState<{ tone: "info" | "bad"; text: string } | null>(null);
+  const [busy, setBusy] = useState(false);
+  const [recipients, setRecipients] = useState<string[]>([]);
+
+  const choice = () => ({ phraseIds, setIds, listeningPointId: pointId ?? options.data?.listeningPoints[0]?.id });
+  async function build() {
+    setBusy(true);
+    setStatus({ tone: "info", text: "Working out the plan…" });
+    try {
+      setPlan(await sendJson<Plan>(`/api/shows/${showId}/rehearsal-plan`, "POST", choice()));
+      setStatus(null);
+    } catch (err) {
+      setStatus({ tone: "bad", text: err instanceof ApiError ? err.message : "The plan could not be made." });
+    } finally {
+      setBusy(false);
+    }
+  }
+  async function send() {
+    setBusy(true);
+    try {
+      const res = await sendJson<{ sent: string[]; failed: string[] }>(`/api/shows/${showId}/rehearsal-plan/send`, "POST", { choice: choice(), userIds: recipients });
+      setStatus(res!.failed.length ? { tone: "bad", text: `Not sent to ${res!.failed.join(", ")}; try again.` } : { tone: "info", text: `Sent to ${res!.sent.join(", ")}.` });
+    } catch (err) {
+      setStatus({ tone: "bad", text: err instanceof ApiError ? err.message : "Not sent." });
+    } finally {
+      setBusy(false);
+    }
+  }
+  // A link from the e-mail carries the choice: build the plan at once.
+  useEffect(() => {
+    if (options.data && (initial.phraseIds.length || initial.setIds.length) && !plan) void build();
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [options.data]);
+
+  if (options.error) return <ErrorState error={options.error} what="show" onRetry={() => options.mutate()} />;
+  const o = options.data;
+  const toggle = (list: string[], set: (v: string[]) => void, id: string) => set(list.includes(id) ? list.filter((x) => x !== id) : [...list, id]);
+  return (
+    <>
+      <div className="no-print">
+        <Breadcrumbs items={[{ label: "Programs", href: "/programs" }, { label: o?.show.name ?? "Show", href: `/shows/${showId}` }, { label: "Stadium rehearsal" }]} />
+        <PageTitle sub="Pick what to rehearse with the stadium time you have. The worst balance comes first.">Stadium rehearsal plan</PageTitle>
+        {!o ? (
+          <p role="status">Loading the show…</p>
+        ) : (
+          <div className="grid items-start gap-6 lg:grid-cols-[3fr_2fr]">
+            <Card title="What to rehearse" titleId="choose-title">
+              <fieldset>
+                <legend className="font-semibold text-ink">Phrases</legend>
+                <div className="mt-2 grid gap-1 sm:grid-cols-2">
+                  {o.phrases.map((p) => (
+                    <label key={p.id} className="flex min-h-11 items-center gap-3">
+                      <input type="checkbox" className="h-5 w-5" checked={phraseIds.includes(p.id)} onChange={() => toggle(phraseIds, setPhraseIds, p.id)} />
+                      <span>
+                        {p.name} <span className="text-ink-soft">(sets {p.firstSet === p.lastSet ? p.firstSet : `${p.firstSet}–${p.lastSet}`})</span>
+                      </span>
+                    </label>
+                  ))}
+                </div>
+              </fieldset>
+              <details className="mt-3">
+                <summary className="cursor-pointer font-semibold">Single sets</summary>
+                <div className="mt-2 flex flex-wrap gap-3">
+                  {o.sets.map((s) => (
+                    <label key={s.id} className="flex min-h-11 items-center gap-2">
+                      <input type="checkbox" className="h-5 w-5" checked={setIds.includes(s.id)} onChange={() => toggle(setIds, setSetIds, s.id)} /> {s.number}
+                    </label>
+                  ))}
+                </div>
+              </details>
+              <label className="mt-4 block font-semibold text-ink" htmlFor="point">
+                Listen from
+              </label>
+              <select id="point" className="mt-1 min-h-11 rounded-lg border border-ink/30 bg-paper-raised px-2" value={pointId ?? o.listeningPoints[0]?.id} onChange={(e) => setPointId(e.target.value)}>
+                {o.listeningPoints.map((l) => (
+                  <option key={l.id} value={l.id}>
+                    {l.name}
+                  </option>
+                ))}
+              </select>
+              <div className="mt-4 flex gap-3">
+                <Button onClick={build} disabled={busy || phraseIds.length + setIds.length === 0}>
+                  Make the plan
+                </Button>
+                {plan ? (
+                  <Button variant="secondary" onClick={() => window.print()}>
+                    Print
+                  </Button>
+                ) : null}
+              </div>
+              <FormMessage id="plan-status" tone={status?.tone ?? "info"}>
+                {status?.text ?? ""}
+              </FormMessage>
+            </Card>
+            {o.canSend ? (
+              <Card title="Send to staff" titleId="send-title">
+                <fieldset>
+                  <legend className="text-ink-soft">They get the plan by e-mail with a link to this page.</legend>
+                  {o.members.map((m) => (
+                    <label key={m.userId} className="mt-1 flex min-h-11 items-center gap-3">
+                      <input type="checkbox" className="h-5 w-5" checked={recipients.includes(m.userId)} onChange={() => toggle(recipients, setRecipients, m.userId)} />
+                      <span>
+                        {m.name} <span className="text-ink-soft">({ROLE_WORDS[m.role].toLowerCase()})</span>
+                      </span>
+                    </label>
+                  ))}
+                </fieldset>
+                <Button className="mt-3" onClick={send} disabled={busy || !plan || recipients.length === 0}>
+                  E-mail the plan
+                </Button>
+              </Card>
+            ) : null}
+          </div>
+        )}
+      </div>
+      {plan ? <PlanSheets plan={plan} showName={o?.show.name ?? ""} /> : null}
+    </>
+  );
+}
+
+function PlanSheets({ plan, showName }: { plan: Plan; showName: string }) {
+  return (
+    <div className="mt-8 space-y-6" data-testid="rehearsal-plan">
+      {plan.items.map((it, i) => (
+        <section key={`${it.kind}-${it.name}`} className="print-sheet rounded-xl border border-ink/10 bg-paper-raised p-6 print:text-[9pt]" aria-labelledby={`item-${i}`}>
+          <p className="text-sm text-ink-soft">
+            {plan.programName} · {showName} · stadium rehearsal, {i + 1} of {plan.items.length}
+          </p>
+          <h2 id={`item-${i}`} className="text-2xl font-bold text-ink">
+            {i + 1}. {it.name}
+          </h2>
+          <p className="text-ink-soft">
+            Sets {it.sets.join(", ")} · balance score {it.severity.toFixed(1)} (higher is worse)
+          </p>
+          <p className="mt-2 rounded-lg bg-paper-sunk p-2 text-sm">
+            Listen from the <strong>{plan.listenFrom.name}</strong>: {plan.listenFrom.words}. Levels are predictions, not measurements; musicians near loud sections should wear hearing protection, and your school's and venue's rules come first.
+          </p>
+          <div className="mt-4 grid gap-6 md:grid-cols-2 print:grid-cols-[5fr_6fr] print:gap-4">
+            <div>
+              <h3 className="font-semibold text-ink">Build up</h3>
+              <ol className="mt-1 list-decimal space-y-1 pl-5">
+                {it.buildUp.map((s) => (
+                  <li key={s.step}>
+                    <span className="font-semibold">{s.title}:</span> {s.sections.join(", ")}
+                  </li>
+                ))}
+              </ol>
+              <h3 className="mt-4 font-semibold text-ink">Checks that fail</h3>
+              {it.failing.length ? (
+                <ul className="mt-1 space-y-2 text-sm">
+                  {it.failing.map((f) => (
+                    <li key={f.id}>
+                      <span className="font-semibold">{CHECK_WORDS[f.id] ?? f.id}</span> (sets {f.sets.join(", ")}): {f.detail}
+                    </li>
+                  ))}
+                </ul>
+              ) : (
+                <p className="text-sm">Every balance check passes.</p>
+              )}
+            </div>
+            <div>
+              <h3 className="font-semibold text-ink">Dynamics to play</h3>
+              <table className="mt-1 w-full text-left text-sm">
+                <thead>
+                  <tr className="border-b border-ink/20">
+                    <th className="py-1 pr-2">Section</th>
+                    <th className="py-1 pr-2">Voice</th>
+                    <th className="py-1 pr-2">Written</th>
+                    <th className="py-1 pr-2">Play</th>
+                    <th className="py-1">From</th>
+                  </tr>
+                </thead>
+                <tbody>
+                  {it.dynamics.map((d) => (
+                    <tr key={d.section} className="border-b border-ink/10">
+                      <td className="py-1 pr-2">{d.section}</td>
+                      <td className="py-1 pr-2">{d.voice}</td>
+                      <td className="py-1 pr-2">{d.written}</td>
+                      <td className="py-1 pr-2 font-bold">{d.play}</td>
+                      <td className="whitespace-nowrap py-1 text-ink-soft">
+                        {SOURCE_WORDS[d.source]}
+                        {d.changeDb !== null ? ` ${d.changeDb > 0 ? "+" : ""}${d.changeDb.toFixed(1)} dB` : ""}
+                      </td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+              {it.unmet.length ? <p className="mt-2 text-sm text-signal-bad">Not reachable within the instruments' ranges: {it.unmet.join(" ")}</p> : null}
+            </div>
+          </div>
+        </section>
+      ))}
+    </div>
+  );
+}

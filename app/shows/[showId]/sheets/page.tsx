@@ -1,0 +1,18 @@
+import type { Metadata } from "next";
+import { PageShell } from "@/components/PageShell";
+import { requireSignedIn } from "@/components/require-session";
+import { SheetsView } from "./SheetsView";
+import "./print.css";
+
+export const metadata: Metadata = { title: "Coordinate sheets" };
+
+export default async function SheetsPage({ params, searchParams }: PageProps<"/shows/[showId]/sheets">) {
+  const { showId } = await params;
+  const { by } = await searchParams;
+  const user = await requireSignedIn(`/shows/${encodeURIComponent(showId)}/sheets`);
+  return (
+    <PageShell userName={user.name}>
+      <SheetsView showId={showId} by={by === "sets" ? "sets" : "performers"} />
+    </PageShell>
+  );
+}
