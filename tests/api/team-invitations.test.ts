@@ -7,7 +7,15 @@ import { linkIn, mailTo, tokenOf, waitForMail } from "../support/mail";
 
 let ids: Awaited<ReturnType<typeof demoIds>>;
 const db = appDatabase();
-afterAll(() => db.end());
+afterAll(async () => {
+  // Leave the demo program with the members it had: other suites count them.
+  const members = (await ids.director.get(`/api/programs/${ids.programId}/members`)).body.members as { userId: string; email: string }[];
+  for (const m of members.filter((m) => m.email.endsWith("@test.example"))) {
+    await ids.director.call("DELETE", `/api/programs/${ids.programId}/members/${m.userId}`);
+  }
+  await db`update invitations set revoked_at = now() where program_id = ${ids.programId} and used_at is null and revoked_at is null`;
+  await db.end();
+});
 
 beforeAll(async () => {
   ids = await demoIds();

@@ -19,6 +19,10 @@ export default async function SignInPage({ searchParams }: PageProps<"/sign-in">
       intro="Hear your drill from the press box before you get stadium time."
       footer={
         <>
+          <Link href="/reset" className="inline-flex min-h-11 items-center font-semibold text-turf-dark underline underline-offset-4">
+            Forgot your password?
+          </Link>
+          <br />
           New to Farfield?{" "}
           <Link href={signUpHref} className="inline-flex min-h-11 items-center font-semibold text-turf-dark underline underline-offset-4">
             Create an account

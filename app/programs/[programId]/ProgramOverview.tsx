@@ -83,7 +83,15 @@ function MembersCard({ program }: { program: ApiState<ProgramResponse> }) {
   if (!program.data) return <SkeletonCard rows={3} label="Loading members…" />;
   const { members } = program.data;
   return (
-    <Card title={`Members (${members.length})`} titleId="members-title">
+    <Card
+      title={`Members (${members.length})`}
+      titleId="members-title"
+      action={
+        <Link href={`/programs/${program.data.program.id}/members`} className="inline-flex min-h-11 items-center font-semibold text-turf-dark underline underline-offset-4">
+          {program.data.role === "director" ? "Invite and manage" : "All members"}
+        </Link>
+      }
+    >
       <ul className="divide-y divide-ink/10">
         {members.map((m) => (
           <li key={m.userId} className="flex min-h-14 flex-wrap items-center justify-between gap-2 py-2">
