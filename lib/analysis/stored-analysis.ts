@@ -12,7 +12,7 @@ import { notFound } from "@/lib/http/errors";
 import { setInputs } from "./balance-inputs";
 import { showConditions } from "./set-input";
 import { showTargets } from "./show-targets";
-import { mixOf } from "./stored-mix";
+import { mixOf } from "./mix-answer";
 
 const STORED_VERSION = `${MODEL_VERSION}+${BALANCE_VERSION}`;
 
