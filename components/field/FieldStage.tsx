@@ -121,7 +121,7 @@ export default function FieldStage(props: FieldStageProps) {
         if (halo) halo.radius(haloRadius(r, rel[id]));
       }
     }
-    dotsLayer.current?.draw();
+    dotsLayer.current?.drawScene(); // the hit graph is redrawn once, when the drag ends
     p.onFrameTime?.(performance.now() - t0);
   }, [v, byId, r]);
 

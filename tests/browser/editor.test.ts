@@ -164,6 +164,7 @@ describe("field editor", () => {
     const box = (await page.locator('[data-testid="field-stage"]').boundingBox())!;
     expect(box.width).toBeGreaterThan(700);
     expect(box.x + box.width).toBeLessThanOrEqual(820);
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(820); // nothing spills sideways
     await page.screenshot({ path: path.join(SHOTS, "editor-tablet.png"), fullPage: true });
     expect(problems).toEqual([]);
   });

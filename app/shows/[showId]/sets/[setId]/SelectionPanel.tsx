@@ -6,6 +6,7 @@ import type { VoiceOrTacet } from "@/lib/acoustics/types";
 import type { Spot } from "@/lib/editor/layout";
 import type { FieldRules } from "@/lib/field/geometry";
 import { describePosition } from "@/lib/field/words";
+import { useLiveMix, type LiveMix } from "./live-mix";
 
 const facingWords = (deg: number) => {
   const d = Math.round(deg) % 360;
@@ -14,6 +15,8 @@ const facingWords = (deg: number) => {
 };
 
 export function SelectionPanel(props: {
+  /** A drag's live mix: the contribution follows it while dragging. */
+  live: LiveMix;
   performers: Performer[];
   spot: Spot | null;
   voice: VoiceOrTacet | null;
@@ -23,6 +26,7 @@ export function SelectionPanel(props: {
   count: number;
 }) {
   const { performers, spot, count } = props;
+  const dragging = useLiveMix(props.live);
   if (count === 0) {
     return <p className="text-sm text-ink-soft">Select a performer on the field to see where they stand and what they add at the box. Drag on empty field to select a group.</p>;
   }
@@ -30,6 +34,7 @@ export function SelectionPanel(props: {
   const p = performers[0];
   if (!p) return null;
   const words = spot ? describePosition(spot.x, spot.y, props.rules) : null;
+  const contribution = dragging?.performers[p.id] ?? props.contributionDbA;
   return (
     <div data-testid="selection" data-performer={p.id}>
       <h3 className="text-lg font-semibold">
@@ -56,8 +61,8 @@ export function SelectionPanel(props: {
             <dt className="text-ink-soft">In steps</dt>
             <dd data-testid="selection-words">{words.text}</dd>
             <dt className="text-ink-soft">At {props.pointName}</dt>
-            <dd className="font-semibold tabular-nums" data-testid="selection-contribution" data-db={props.contributionDbA ?? ""}>
-              {props.contributionDbA !== undefined && Number.isFinite(props.contributionDbA) ? `${props.contributionDbA.toFixed(1)} dBA` : "not sounding"}
+            <dd className="font-semibold tabular-nums" data-testid="selection-contribution" data-db={contribution ?? ""}>
+              {contribution !== undefined && Number.isFinite(contribution) ? `${contribution.toFixed(1)} dBA` : "not sounding"}
             </dd>
           </>
         ) : (

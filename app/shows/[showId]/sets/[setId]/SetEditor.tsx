@@ -29,6 +29,13 @@ import { SelectionPanel } from "./SelectionPanel";
 import { SetsBar } from "./SetsBar";
 import { usePreview, type PreviewMix } from "./use-preview";
 import { useSetSaver } from "./use-set-saver";
+import { createLiveMix, useLiveMix, type LiveMix } from "./live-mix";
+
+/** The mix panel, showing a drag's live mix while there is one. */
+function LiveMixPanel({ live, mix, source, ...rest }: { live: LiveMix } & Parameters<typeof MixPanel>[0]) {
+  const dragging = useLiveMix(live);
+  return <MixPanel mix={dragging ?? mix} source={dragging ? "preview" : source} {...rest} />;
+}
 
 declare global {
   interface Window {
@@ -63,7 +70,7 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
   const [placingId, setPlacingId] = useState<string | null>(null);
   const [snap, setSnap] = useState(false);
   const [showGrid, setShowGrid] = useState(false);
-  const [dragMix, setDragMix] = useState<PreviewMix | null>(null);
+  const [liveMix] = useState(createLiveMix);
   const [playCount, setPlayCount] = useState<number | null>(null);
   const frameTimes = useRef<number[]>([]);
 
@@ -113,12 +120,11 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
 
   const previewMix = useMemo(() => (preview ? preview.mixFor(shown) : null), [preview, shown]);
   const stored = analysis.data && !saver.dirty && playCount === null && mixInput.data && !mixInput.isValidating ? analysis.data : null;
-  const mix: MixFigures | null = dragMix ?? (stored ? stored.mix : previewMix);
+  const mix: MixFigures | null = stored ? stored.mix : previewMix;
   const perPerformer: Record<string, number> = useMemo(() => {
-    if (dragMix) return dragMix.performers;
     if (stored) return Object.fromEntries(stored.mix.performers.flatMap((p) => (p.dbA === null ? [] : [[p.performerId, p.dbA]])));
     return previewMix?.performers ?? {};
-  }, [dragMix, stored, previewMix]);
+  }, [stored, previewMix]);
   const loudest = useMemo(() => Math.max(-Infinity, ...Object.values(perPerformer).filter(Number.isFinite)), [perPerformer]);
   const relDb = useMemo(() => Object.fromEntries(Object.entries(perPerformer).map(([id, db]) => [id, db - loudest])), [perPerformer, loudest]);
 
@@ -356,13 +362,13 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
               onDragFrame={(moved) => {
                 if (!preview) return;
                 const m = preview.mixFor(layout, moved);
-                flushSync(() => setDragMix(m));
+                flushSync(() => liveMix.set(m));
                 const top = Math.max(...Object.values(m.performers).filter(Number.isFinite));
                 return Object.fromEntries(moved.map((p) => [p.performerId, (m.performers[p.performerId] ?? -Infinity) - top]));
               }}
               onDragEnd={(ids, dx, dy) => {
-                setDragMix(null);
                 apply((l) => moveBy(l, ids, dx, dy));
+                liveMix.set(null);
               }}
               onPlace={(x, y) => {
                 if (!placingId) return;
@@ -398,9 +404,10 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
           ) : null}
         </div>
         <aside className="flex flex-col gap-3">
-          <MixPanel mix={mix} source={!mix ? "loading" : stored && !dragMix ? "stored" : "preview"} pointName={point?.name ?? "the listening point"} computedAt={stored?.computedAt} />
+          <LiveMixPanel live={liveMix} mix={mix} source={!mix ? "loading" : stored ? "stored" : "preview"} pointName={point?.name ?? "the listening point"} computedAt={stored?.computedAt} />
           <div className="rounded-xl border border-ink/10 bg-paper-raised p-4 shadow-sm">
             <SelectionPanel
+              live={liveMix}
               performers={selPerformers}
               count={selected.length}
               spot={one ? (shown[one] ?? null) : null}

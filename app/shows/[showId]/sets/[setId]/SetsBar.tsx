@@ -29,7 +29,7 @@ export function SetsBar(props: {
   const btn = "min-h-9 rounded-md border border-ink/20 bg-paper-raised px-3 text-sm font-semibold hover:bg-paper-sunk disabled:opacity-50";
   return (
     <section aria-label="Sets" className="rounded-xl border border-ink/10 bg-paper-raised p-2 shadow-sm">
-      <ol className="flex gap-1.5 overflow-x-auto pb-1" data-testid="sets-strip">
+      <ol className="relative flex gap-1.5 overflow-x-auto pb-1" data-testid="sets-strip">
         {props.sets.map((s) => (
           <li key={s.id}>
             <Link
