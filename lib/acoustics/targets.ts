@@ -4,7 +4,7 @@ import { AcousticsInputError, requireInRange } from "./errors";
 import { VOICES, type Voice } from "./types";
 
 /** Bumped whenever the checks or the plan compute differently, so stored results are recomputed. */
-export const BALANCE_VERSION = "farfield-balance-2";
+export const BALANCE_VERSION = "farfield-balance-3";
 
 export interface BalanceTargets {
   /** melody-forward: the melody leads every other voice by at least this (dB). */
@@ -37,8 +37,10 @@ export interface BalanceTargets {
  * - depthToleranceDb 3: common practice, no source (front players listen back and blend).
  * - wideFormWidthM 36.576 (40 yd) and edgeToleranceDb 0: common practice, no source.
  * - standOutDb 6: common practice, no source (6 dB is twice the sound pressure of the others).
- * - arrivalSpreadMs 40: the precedence (Haas) effect, a second arrival within roughly 30–40 ms
- *   fuses with the first and later ones smear (from memory; Haas 1951).
+ * - arrivalSpreadMs 100: the precedence (Haas) effect fuses a second arrival within roughly 30–40 ms
+ *   for speech (Haas 1951); for music the echo threshold lies higher, some 50–100 ms depending on the
+ *   attacks (from memory). A field-deep form always spreads 60 ms or more at the box, so 100 ms flags
+ *   the forms whose back players will sound late there, not every set.
  * - blendToleranceDb 6: common practice, no source.
  * - setChangeDb 3: common practice, no source (the sound should not jump from one set to the next).
  */
@@ -50,7 +52,7 @@ export const DEFAULT_TARGETS: Readonly<BalanceTargets> = Object.freeze({
   wideFormWidthM: 40 * 0.9144,
   edgeToleranceDb: 0,
   standOutDb: 6,
-  arrivalSpreadMs: 40,
+  arrivalSpreadMs: 100,
   blendToleranceDb: 6,
   setChangeDb: 3,
 });

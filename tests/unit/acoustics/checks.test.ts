@@ -157,7 +157,7 @@ describe("stand-outs (6 dB above the median of the rest of the section: common p
   });
 });
 
-describe("arrival-spread (40 ms: precedence effect, from memory; Haas 1951)", () => {
+describe("arrival-spread (100 ms: echo threshold for music, from memory; precedence effect, Haas 1951)", () => {
   // Arrival r / c with c = 343.2 m/s at 20 °C (ISO 9613-1 form, shared references).
   const c = speedOfSound(AIR.temperatureC);
   const r = (y: number) => Math.hypot(0, y - BOX.y, 1.5 - BOX.z);
@@ -173,13 +173,13 @@ describe("arrival-spread (40 ms: precedence effect, from memory; Haas 1951)", ()
     expect(pointOf(i).arrivalSpreadMs).toBeCloseTo(35, 6);
   });
 
-  it("passes 35 ms and fails 45 ms, naming the late player; tacet players do not count", () => {
+  it("passes 95 ms and fails 105 ms, naming the late player; tacet players do not count", () => {
     const near = at({ id: "A", x: 0, y: 0 });
-    expect(check([near, at({ id: "B", x: 0, y: yForDelay(35) }), at({ id: "Z", x: 0, y: yForDelay(90), voice: "tacet" })], "arrival-spread").passed).toBe(true);
-    const late = check([near, at({ id: "B", x: 0, y: yForDelay(45) })], "arrival-spread");
+    expect(check([near, at({ id: "B", x: 0, y: yForDelay(95) }), at({ id: "Z", x: 0, y: yForDelay(140), voice: "tacet" })], "arrival-spread").passed).toBe(true);
+    const late = check([near, at({ id: "B", x: 0, y: yForDelay(105) })], "arrival-spread");
     expect(late.passed).toBe(false);
     expect(late.performerIds).toEqual(["B"]);
-    expect(late.detail).toMatch(/45 ms after the nearest \(limit 40 ms\)/);
+    expect(late.detail).toMatch(/105 ms after the nearest \(limit 100 ms\)/);
   });
 });
 
