@@ -42,3 +42,8 @@ export async function listSets(showId: string) {
     .where(eq(sets.showId, showId))
     .orderBy(asc(sets.order));
 }
+
+/** The director's balance thresholds for a show; null returns it to the defaults. */
+export async function saveCheckTargets(showId: string, targets: Record<string, unknown> | null) {
+  await db.update(shows).set({ checkTargets: targets }).where(eq(shows.id, showId));
+}

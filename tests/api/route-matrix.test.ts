@@ -75,6 +75,8 @@ const RULES: Record<string, Rule> = {
   "GET shows/[showId]/imports/[uploadId]": { roles: ALL },
   "GET shows/[showId]/imports/[uploadId]/file": { roles: ALL },
   "POST shows/[showId]/imports/[uploadId]/confirm": { roles: EDITORS, body: "none" },
+  "GET shows/[showId]/targets": { roles: ALL },
+  "PUT shows/[showId]/targets": { roles: DIRECTORS, body: "json" },
   "GET shows/[showId]/rehearsal-plan": { roles: ALL },
   "POST shows/[showId]/rehearsal-plan": { roles: ALL, body: "json" },
   "GET shows/[showId]/sheets": { roles: ALL },

@@ -1,0 +1,115 @@
+"use client";
+// The show's balance thresholds: directors change them (every stored analysis follows), others read them.
+import { useState } from "react";
+import { Breadcrumbs } from "@/components/Breadcrumbs";
+import { Button } from "@/components/Button";
+import { Card } from "@/components/Card";
+import { ErrorState } from "@/components/ErrorState";
+import { ApiError, sendJson } from "@/components/fetcher";
+import { FormMessage } from "@/components/FormMessage";
+import { PageTitle } from "@/components/PageTitle";
+import { SkeletonCard } from "@/components/Skeleton";
+import { TextField } from "@/components/TextField";
+import { apiKeys, useApi } from "@/components/use-api";
+import type { ShowResponse } from "@/components/api-types";
+import { TARGET_FIELDS, type TargetKey } from "./target-fields";
+
+type TargetsResponse = {
+  targets: Record<TargetKey, number> & { pyramidVoices: string[] };
+  defaults: Record<TargetKey, number>;
+  ranges: Record<TargetKey, [number, number]>;
+  canEdit: boolean;
+};
+
+export function TargetsForm({ showId }: { showId: string }) {
+  const key = `/api/shows/${encodeURIComponent(showId)}/targets`;
+  const targets = useApi<TargetsResponse>(key);
+  const show = useApi<ShowResponse>(apiKeys.show(showId));
+  const [draft, setDraft] = useState<Partial<Record<TargetKey, string>>>({});
+  const [status, setStatus] = useState<{ tone: "info" | "bad"; text: string } | null>(null);
+  const [issues, setIssues] = useState<Record<string, string[]>>({});
+  const [pending, setPending] = useState(false);
+
+  const crumbs = [
+    { label: "Programs", href: "/programs" },
+    { label: show.data?.show.name ?? "Show", href: `/shows/${showId}` },
+    { label: "Balance targets" },
+  ];
+  if (targets.error) {
+    return (
+      <>
+        <Breadcrumbs items={crumbs} />
+        <ErrorState error={targets.error} what="balance targets" onRetry={() => targets.mutate()} />
+      </>
+    );
+  }
+  if (!targets.data) return <SkeletonCard rows={6} label="Loading the balance targets…" />;
+  const { canEdit, defaults } = targets.data;
+  const value = (k: TargetKey) => draft[k] ?? String(Math.round(targets.data!.targets[k] * 100) / 100);
+
+  async function save(body: unknown, done: string) {
+    setPending(true);
+    setStatus(null);
+    setIssues({});
+    try {
+      await sendJson(key, "PUT", body);
+      await targets.mutate();
+      setDraft({});
+      setStatus({ tone: "info", text: done });
+    } catch (err) {
+      const e = err instanceof ApiError ? err : new ApiError(0, "Could not save.");
+      setIssues(Object.fromEntries(Object.entries(e.issues).map(([k, v]) => [k.replace(/^targets\./, ""), v])));
+      setStatus({ tone: "bad", text: e.message });
+    } finally {
+      setPending(false);
+    }
+  }
+
+  function submit(event: React.FormEvent) {
+    event.preventDefault();
+    const out: Record<string, number | string[]> = { pyramidVoices: targets.data!.targets.pyramidVoices };
+    for (const f of TARGET_FIELDS) out[f.key] = Number(value(f.key));
+    void save({ targets: out }, "Saved. Every set's checks now use these thresholds.");
+  }
+
+  return (
+    <>
+      <Breadcrumbs items={crumbs} />
+      <PageTitle sub="The thresholds the balance checks and the balance plan use for this show.">Balance targets</PageTitle>
+      <Card title="Thresholds" titleId="targets-title">
+        <form onSubmit={submit} className="space-y-5" aria-describedby="targets-status">
+          {TARGET_FIELDS.map((f) => (
+            <TextField
+              key={f.key}
+              id={`target-${f.key}`}
+              label={`${f.label} (${f.unit})`}
+              hint={`Default ${Math.round(defaults[f.key] * 100) / 100} ${f.unit}: ${f.basis}.`}
+              type="number"
+              inputMode="decimal"
+              step={f.step}
+              min={targets.data!.ranges[f.key][0]}
+              max={targets.data!.ranges[f.key][1]}
+              value={value(f.key)}
+              readOnly={!canEdit}
+              errors={issues[f.key]}
+              onChange={(e) => setDraft((d) => ({ ...d, [f.key]: e.target.value }))}
+            />
+          ))}
+          <div aria-live="polite" id="targets-status">
+            {status ? <FormMessage id="targets-message" tone={status.tone}>{status.text}</FormMessage> : null}
+          </div>
+          {canEdit ? (
+            <div className="flex flex-wrap gap-3">
+              <Button type="submit" disabled={pending}>{pending ? "Saving…" : "Save thresholds"}</Button>
+              <Button variant="secondary" disabled={pending} onClick={() => void save({ reset: true }, "Back to the documented defaults.")}>
+                Use the defaults
+              </Button>
+            </div>
+          ) : (
+            <p className="text-ink-soft">Only a director of the program changes these.</p>
+          )}
+        </form>
+      </Card>
+    </>
+  );
+}
