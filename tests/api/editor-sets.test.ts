@@ -26,7 +26,10 @@ describe("POST sets", () => {
     const after = await sets();
     expect(after.at(-1)!.id).toBe(res.body.set.id);
     expect((await designer.get(`${base()}/${res.body.set.id}`)).body.positions).toEqual([]);
-    expect((await designer.call("DELETE", `${base()}/${res.body.set.id}?version=1`)).status).toBe(204);
+    // Added after the last set it also takes the next number (not "nA").
+    const afterLast = await designer.post(base(), { after: res.body.set.id });
+    expect(afterLast.body.set.number).toBe(String(max + 2));
+    for (const id of [afterLast.body.set.id, res.body.set.id]) expect((await designer.call("DELETE", `${base()}/${id}?version=1`)).status).toBe(204);
   });
 
   it("duplicates a set right after it as nA, with its positions and counts, moving later sets down", async () => {

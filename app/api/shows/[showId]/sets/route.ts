@@ -23,8 +23,11 @@ export const POST = route<{ showId: string }>(async (req, { showId }) => {
   };
   const source = await known(body.duplicateOf, "duplicateOf");
   const after = (await known(body.after, "after")) ?? source;
-  const numbers = (await listSets(showId)).map((s) => s.number);
-  const number = body.number ?? (after ? insertedSetNumber(after.number, numbers) : nextSetNumber(numbers));
+  const all = await listSets(showId);
+  const numbers = all.map((s) => s.number);
+  // A set inserted between two is numbered after the one before it (12A); one added at the end gets the next number.
+  const inserted = after !== null && all.some((s) => s.order > after.order);
+  const number = body.number ?? (inserted ? insertedSetNumber(after.number, numbers) : nextSetNumber(numbers));
   const result = await createSet(showId, { number, counts: body.counts ?? source?.counts ?? DEFAULT_COUNTS, after, copyFromSetId: source?.id ?? null });
   if (!result.ok) throw conflict(`A set numbered ${number} already exists in this show.`);
   return NextResponse.json({ set: result.set }, { status: 201 });

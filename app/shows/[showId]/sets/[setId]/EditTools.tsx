@@ -113,8 +113,9 @@ export function EditTools(props: {
         <button type="button" className={btn} disabled={none} onClick={() => props.onForm("snap")}>
           Snap to steps
         </button>
+        <span className="mx-1 h-6 w-px bg-ink/15" aria-hidden="true" />
+        {toggles}
       </div>
-      {toggles}
     </div>
   );
 }

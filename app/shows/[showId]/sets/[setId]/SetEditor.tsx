@@ -404,8 +404,7 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
           ) : null}
         </div>
         <aside className="flex flex-col gap-3">
-          <LiveMixPanel live={liveMix} mix={mix} source={!mix ? "loading" : stored ? "stored" : "preview"} pointName={point?.name ?? "the listening point"} computedAt={stored?.computedAt} />
-          <div className="rounded-xl border border-ink/10 bg-paper-raised p-4 shadow-sm">
+          <div className="rounded-xl border border-ink/10 bg-paper-raised px-4 py-3 shadow-sm">
             <SelectionPanel
               live={liveMix}
               performers={selPerformers}
@@ -417,6 +416,7 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
               rules={show.data.show.fieldRules}
             />
           </div>
+          <LiveMixPanel live={liveMix} mix={mix} source={!mix ? "loading" : stored ? "stored" : "preview"} pointName={point?.name ?? "the listening point"} computedAt={stored?.computedAt} />
           <div className="rounded-xl border border-ink/10 bg-paper-raised p-4 shadow-sm">
             <RosterPanel
               unplaced={unplaced}

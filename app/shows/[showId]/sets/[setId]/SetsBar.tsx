@@ -28,8 +28,8 @@ export function SetsBar(props: {
   };
   const btn = "min-h-9 rounded-md border border-ink/20 bg-paper-raised px-3 text-sm font-semibold hover:bg-paper-sunk disabled:opacity-50";
   return (
-    <section aria-label="Sets" className="rounded-xl border border-ink/10 bg-paper-raised p-2 shadow-sm">
-      <ol className="relative flex gap-1.5 overflow-x-auto pb-1" data-testid="sets-strip">
+    <section aria-label="Sets" className="flex flex-wrap items-center gap-2 rounded-xl border border-ink/10 bg-paper-raised p-2 shadow-sm xl:flex-nowrap">
+      <ol className="relative flex min-w-0 flex-1 basis-96 gap-1.5 overflow-x-auto pb-1" data-testid="sets-strip">
         {props.sets.map((s) => (
           <li key={s.id}>
             <Link
@@ -47,7 +47,7 @@ export function SetsBar(props: {
         ))}
       </ol>
       {props.editable && current ? (
-        <div className="mt-1 flex flex-wrap items-center gap-1.5">
+        <div className="flex shrink-0 flex-wrap items-center gap-1.5">
           <button type="button" className={btn} onClick={act(props.onAdd)}>
             Add set
           </button>
