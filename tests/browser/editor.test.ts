@@ -91,6 +91,34 @@ describe("field editor", () => {
     }
   });
 
+  it("plays the transition from the previous set count by count, the box mix following", async () => {
+    const { page, problems } = await open(DEMO.staff);
+    // A set whose performers move well away from where the previous set has them.
+    const positionsOf = async (i: number) => new Map(((await ids.director.get(`/api/shows/${ids.showId}/sets/${ids.setIds[i]}`)).body.positions as any[]).map((p) => [p.performerId, p]));
+    let chosen = -1;
+    for (let i = 1; i < ids.setIds.length && chosen < 0; i++) {
+      const [a, b] = [await positionsOf(i - 1), await positionsOf(i)];
+      const far = [...b].filter(([id, q]) => a.has(id) && Math.hypot(q.x - a.get(id).x, q.y - a.get(id).y) > 8).length;
+      if (far > 20) chosen = i;
+    }
+    expect(chosen).toBeGreaterThan(0);
+    await openSet(page, ids.showId, ids.setIds[chosen]);
+    const storedTotal = Number((await page.locator('[data-testid="mix-total"]').textContent())!.split(" ")[0]);
+    await page.locator('[data-testid="play-transition"]').click();
+    await expect.poll(() => page.locator('[data-testid="mix-panel"]').getAttribute("data-source")).toBe("preview");
+    const totals = new Set<string>();
+    for (let k = 0; k < 8; k++) {
+      totals.add((await page.locator('[data-testid="mix-total"]').textContent())!);
+      await page.waitForTimeout(450);
+    }
+    expect(await page.getByText(/^Count \d+ of \d+$/).count()).toBe(1);
+    expect(totals.size).toBeGreaterThan(1); // the mix changes as the performers move
+    await page.locator('[data-testid="play-transition"]').click(); // stop
+    await waitForStoredMix(page);
+    expect(Number((await page.locator('[data-testid="mix-total"]').textContent())!.split(" ")[0])).toBeCloseTo(storedTotal, 1);
+    expect(problems).toEqual([]);
+  });
+
   it("staff see the set but cannot move anything, and no save is sent", async () => {
     const { page, problems } = await open(DEMO.staff);
     const setId = ids.setIds[7];
@@ -156,6 +184,41 @@ describe("field editor", () => {
     expect(at(idA).x).toBeCloseTo(spotA.x + 4 * 0.5715, 6); // A's change kept
     expect(at(idB).y).toBeCloseTo(spotB.y + 0.5715, 6); // B's change re-applied, nothing lost
     expect(server.set.version).toBe(start.version! + 2);
+  });
+
+  it("a designer adds an empty set, places performers from the roster with clicks, and deletes the set after confirming", async () => {
+    const { page, problems } = await open(DEMO.designer);
+    const last = ids.setIds[ids.setIds.length - 1];
+    await openSet(page, ids.showId, last);
+    await page.getByRole("button", { name: "Add set" }).click();
+    await page.waitForURL((url) => !url.pathname.endsWith(last), { timeout: 30_000 });
+    await page.waitForSelector('[data-testid="field-stage"] canvas', { timeout: 60_000 });
+    await expect.poll(async () => (await editorState(page)).version).toBe(1);
+    expect(Object.keys((await editorState(page)).layout)).toEqual([]);
+    const unplaced = page.locator('[data-testid="unplaced"] button');
+    const total = await unplaced.count();
+    expect(total).toBeGreaterThan(50);
+    await unplaced.first().click();
+    for (const [x, y] of [[-4.572, 16.256], [4.572, 16.256]]) {
+      const p = await screenOf(page, lps(), x, y);
+      await page.mouse.click(p.x, p.y);
+    }
+    await page.keyboard.press("Escape");
+    await expect.poll(async () => (await editorState(page)).version, { timeout: 30_000 }).toBeGreaterThan(1);
+    await waitSaved(page);
+    await waitForStoredMix(page);
+    const placed = Object.values((await editorState(page)).layout);
+    expect(placed).toHaveLength(2);
+    expect(placed.map((s) => Math.round(s.x))).toEqual(expect.arrayContaining([-5, 5]));
+    expect(await unplaced.count()).toBe(total - 2);
+    await page.screenshot({ path: path.join(SHOTS, "editor-laptop-new-set.png") });
+    const url = page.url();
+    await page.getByRole("button", { name: "Delete set…" }).click();
+    await page.getByRole("alertdialog").getByRole("button", { name: "Delete" }).click();
+    await page.waitForURL((u) => u.toString() !== url, { timeout: 30_000 });
+    const show = await page.evaluate(async (u) => (await fetch(u)).json(), `/api/shows/${ids.showId}`);
+    expect(show.sets.map((s: any) => s.id)).toEqual(ids.setIds);
+    expect(problems).toEqual([]);
   });
 
   it("fits a tablet-size window (820 × 1180)", async () => {
