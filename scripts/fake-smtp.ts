@@ -19,6 +19,7 @@ export async function keepMessage(dir: string, raw: Buffer, envelopeTo: string[]
   const parsed = await simpleParser(raw);
   const id = `${new Date().toISOString().replace(/[:.]/g, "-")}-${randomUUID().slice(0, 8)}`;
   const file = `${id}.eml`;
+  await mkdir(dir, { recursive: true }); // the folder may have been cleared while the server runs
   await writeFile(path.join(dir, file), raw);
   const entry: KeptMessage = {
     id,

@@ -10,9 +10,8 @@ ensure_postgres
 ensure_chromium
 command -v pdftoppm >/dev/null || apt_install poppler-utils # renders the PDF sheets in the tests
 
-# The fake SMTP server keeps what the app sends in .tmp/mail-test (tests read it); it exits with this script.
-export SMTP_HOST=127.0.0.1 SMTP_PORT="$(free_port)" DEV_MAILBOX=true MAIL_DIR="$ROOT/.tmp/mail-test"
-rm -rf "$MAIL_DIR"
+# The fake SMTP server keeps what the app sends in a folder of this run (tests read it); it exits with this script.
+export SMTP_HOST=127.0.0.1 SMTP_PORT="$(free_port)" DEV_MAILBOX=true MAIL_DIR="$ROOT/.tmp/mail-test-$$"
 FAKE_SMTP_WATCH_PID=$$ npx tsx scripts/fake-smtp.ts >"$ROOT/.tmp/fake-smtp.log" 2>&1 &
 stack_up test
 
@@ -20,4 +19,5 @@ status=0
 rm -f "$ROOT/.tmp/vitest.json"
 npx vitest run --reporter=default --reporter=json --outputFile.json="$ROOT/.tmp/vitest.json" "$@" || status=$?
 node scripts/lib/summary.mjs "$ROOT/.tmp/vitest.json" || status=1
+rm -rf "$MAIL_DIR"
 exit "$status"

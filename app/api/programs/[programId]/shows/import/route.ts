@@ -5,6 +5,7 @@ import { requireProgram } from "@/lib/auth/access";
 import { badRequest } from "@/lib/http/errors";
 import { route } from "@/lib/http/handler";
 import { readUpload } from "@/lib/http/upload";
+import { decodeUploadText } from "@/lib/imports/text";
 import { readShowFile } from "@/lib/show-file/read";
 import { z } from "zod";
 
@@ -18,7 +19,9 @@ const nameSchema = z.string().trim().min(1).max(160).optional();
 export const POST = route<{ programId: string }>(async (req, { programId }) => {
   const { user } = await requireProgram(programId, "manage-show");
   const upload = await readUpload(req, MAX_SHOW_FILE_BYTES);
-  const read = readShowFile(new TextDecoder("utf-8").decode(upload.bytes));
+  const decoded = decodeUploadText(upload.bytes);
+  if (!decoded.ok) throw badRequest(decoded.reason, { file: [decoded.reason] });
+  const read = readShowFile(decoded.text);
   if (!read.ok) throw badRequest(read.error, read.issues);
   const name = nameSchema.safeParse(upload.fields.name || undefined);
   if (!name.success) throw badRequest("The new show's name is not valid.", { name: ["Use 1 to 160 characters."] });
