@@ -10,4 +10,9 @@ npx tsx db/migrate.ts
 [ -f db/demo/load.ts ] && npx tsx db/demo/load.ts
 mkdir -p .tmp
 export TMPDIR="$ROOT/.tmp"
+# Mail goes to the local fake server unless SMTP settings are given (see npm start).
+if [ -z "${SMTP_HOST:-}" ]; then
+  export DEV_MAILBOX=true MAIL_DIR="${MAIL_DIR:-$ROOT/.data/mail}"
+  FAKE_SMTP_WATCH_PID=$$ npx tsx scripts/fake-smtp.ts &
+fi
 exec npx next dev -H 127.0.0.1 -p "$PORT"

@@ -1,5 +1,5 @@
 // The music of a show as the API takes it: phrases, per-section voices and written dynamics, per-performer overrides.
-import { z } from "zod";
+import { z } from "./zod";
 import { DYNAMICS } from "@/lib/acoustics/types";
 
 export const VOICE_OR_TACET = ["melody", "countermelody", "accompaniment", "bass", "percussion", "tacet"] as const;

@@ -1,5 +1,5 @@
 // The body of "add performers by instrument" (POST /api/shows/{showId}/performers).
-import { z } from "zod";
+import { z } from "./zod";
 
 const text = (max: number) => z.string().trim().max(max);
 

@@ -1,5 +1,5 @@
 // A box reading as the API and the form take it: one schema for the form, the CSV rows and the server.
-import { z } from "zod";
+import { z } from "./zod";
 import { DYNAMICS } from "@/lib/acoustics/types";
 
 const finite = (what: string) => z.number({ error: `${what} must be a number.` }).refine(Number.isFinite, `${what} must be a finite number.`);

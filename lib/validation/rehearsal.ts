@@ -1,5 +1,5 @@
 // What the director chooses for a stadium rehearsal plan (shared by the page and the routes).
-import { z } from "zod";
+import { z } from "./zod";
 
 export const rehearsalChoiceSchema = z
   .object({

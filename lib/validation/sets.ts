@@ -1,5 +1,5 @@
 // Bodies of the set-management routes (add, duplicate, renumber, counts, delete, remove performers).
-import { z } from "zod";
+import { z } from "./zod";
 
 /** As the drill names a set: digits and up to two letters ("12", "12A"), stored in capitals. */
 export const setNumberSchema = z
@@ -20,10 +20,11 @@ export const createSetSchema = z.object({
   after: z.string().uuid("after must be a set's id.").optional(),
   /** Start with this set's positions. */
   duplicateOf: z.string().uuid("duplicateOf must be a set's id.").optional(),
-});
+}).strict();
 
 export const updateSetSchema = z
   .object({ version: versionSchema, number: setNumberSchema.optional(), counts: countsSchema.optional() })
+  .strict()
   .refine((b) => b.number !== undefined || b.counts !== undefined, { message: "Give a new number or new counts.", path: ["number"] });
 
 export const deleteSetQuery = z.object({ version: z.coerce.number().int().min(1) });

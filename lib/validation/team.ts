@@ -1,5 +1,5 @@
 // Members, invitations and password resets: input shared by the forms and the route handlers.
-import { z } from "zod";
+import { z } from "./zod";
 import { MIN_PASSWORD_LENGTH } from "@/lib/auth/password-rules";
 import type { Role } from "@/lib/auth/permissions";
 

@@ -79,6 +79,7 @@ const RULES: Record<string, Rule> = {
   "PUT shows/[showId]/targets": { roles: DIRECTORS, body: "json" },
   "GET shows/[showId]/rehearsal-plan": { roles: ALL },
   "POST shows/[showId]/rehearsal-plan": { roles: ALL, body: "json" },
+  "POST shows/[showId]/rehearsal-plan/send": { roles: DIRECTORS, body: "json" },
   "GET shows/[showId]/sheets": { roles: ALL },
   "GET shows/[showId]/sheets/pdf": { roles: ALL },
   "GET shows/[showId]/sheets/roster.csv": { roles: ALL },
