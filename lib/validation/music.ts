@@ -8,19 +8,23 @@ const id = (what: string) => z.string().uuid(`${what} must be an id.`);
 const voice = z.enum(VOICE_OR_TACET, { error: `voice must be one of ${VOICE_OR_TACET.join(", ")}.` });
 const dynamic = z.enum(DYNAMICS, { error: `The dynamic must be one of ${DYNAMICS.join(", ")}.` });
 
-export const phraseSchema = z.object({
-  name: z.string().trim().min(1, "Name the phrase.").max(120, "That name is too long."),
-  firstSetId: id("firstSetId"),
-  lastSetId: id("lastSetId"),
-});
-export const phrasePatchSchema = phraseSchema.partial();
+export const phraseSchema = z
+  .object({
+    name: z.string().trim().min(1, "Name the phrase.").max(120, "That name is too long."),
+    firstSetId: id("firstSetId"),
+    lastSetId: id("lastSetId"),
+  })
+  .strict();
+export const phrasePatchSchema = phraseSchema
+  .partial()
+  .refine((b) => Object.keys(b).length > 0, { message: "Give a new name, first set or last set.", path: ["name"] });
 
 /** Bulk change of section rows: every listed row gets the given voice and/or written dynamic. */
 export const assignmentsPatchSchema = z.object({
   rows: z.array(z.object({ phraseId: id("phraseId"), section: z.string().min(1).max(120) })).min(1, "Select at least one row.").max(2000),
   voice: voice.optional(),
   writtenDynamic: dynamic.optional(),
-}).refine((b) => b.voice !== undefined || b.writtenDynamic !== undefined, { message: "Give a voice or a written dynamic to set.", path: ["voice"] });
+}).strict().refine((b) => b.voice !== undefined || b.writtenDynamic !== undefined, { message: "Give a voice or a written dynamic to set.", path: ["voice"] });
 
 export const overrideSchema = z.object({
   phraseId: id("phraseId"),

@@ -1,12 +1,17 @@
-// Proposing and adopting a phrase's balance plan, against the demo in real PostgreSQL.
+// Proposing and adopting a phrase's balance plan, against a private copy of the demo in real PostgreSQL
+// (other suites move the demo's performers); the role checks run on the demo itself.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEMO, demoIds, signedIn, type Client } from "../support/api";
+import { copyDemoShow } from "../support/show-copy";
 
 let ids: Awaited<ReturnType<typeof demoIds>>;
+let copy: Awaited<ReturnType<typeof copyDemoShow>>;
 let staff: Client;
 let designer: Client;
 let phraseId: string;
+let copyPhraseId: string;
 const planPath = () => `/api/shows/${ids.showId}/phrases/${phraseId}/plan`;
+const copyPlanPath = () => `/api/shows/${copy.showId}/phrases/${copyPhraseId}/plan`;
 const ORDER = ["pp", "p", "mp", "mf", "f", "ff", "fff"];
 
 beforeAll(async () => {
@@ -15,15 +20,14 @@ beforeAll(async () => {
   designer = await signedIn(DEMO.designer);
   const music = await ids.director.get(`/api/shows/${ids.showId}/music`);
   phraseId = music.body.phrases.find((p: any) => p.name === "Clarinet song").id;
-});
-
-afterAll(async () => {
-  await ids.director.call("DELETE", planPath());
-});
+  copy = await copyDemoShow("plan");
+  const copyMusic = await copy.client.get(`/api/shows/${copy.showId}/music`);
+  copyPhraseId = copyMusic.body.phrases.find((p: any) => p.name === "Clarinet song").id;
+}, 60_000);
 
 describe("phrase plan", () => {
   it("proposes, for the clarinet-melody phrase, clarinets above what is written and the melody forward in every set after", async () => {
-    const res = await staff.get(`${planPath()}?listeningPointId=${ids.pressBoxId}`);
+    const res = await copy.client.get(`${copyPlanPath()}?listeningPointId=${copy.pressBoxId}`);
     expect(res.status).toBe(200);
     const clarinets = res.body.entries.find((e: any) => e.section === "Clarinets");
     expect(clarinets.writtenDynamic).toBe("p");
@@ -49,13 +53,13 @@ describe("phrase plan", () => {
   });
 
   it("adopting changes every set's mix as predicted, keeps the written dynamics, and can be undone", async () => {
-    const proposal = (await ids.director.get(`${planPath()}?listeningPointId=${ids.pressBoxId}`)).body;
+    const proposal = (await copy.client.get(`${copyPlanPath()}?listeningPointId=${copy.pressBoxId}`)).body;
     const entries = proposal.entries.map((e: any) => ({ section: e.section, playedDynamic: e.playedDynamic }));
-    const adopt = await ids.director.post(planPath(), { listeningPointId: ids.pressBoxId, entries });
+    const adopt = await copy.client.post(copyPlanPath(), { listeningPointId: copy.pressBoxId, entries });
     expect(adopt.status).toBe(200);
 
     for (const s of proposal.sets) {
-      const a = await staff.get(`/api/shows/${ids.showId}/sets/${s.setId}/analysis?listeningPointId=${ids.pressBoxId}`);
+      const a = await copy.client.get(`/api/shows/${copy.showId}/sets/${s.setId}/analysis?listeningPointId=${copy.pressBoxId}`);
       expect(a.body.reused).toBe(false);
       for (const [voice, v] of Object.entries<any>(s.after.voices)) expect(a.body.mix.voices[voice].dbA).toBeCloseTo(v.dbA, 6);
       for (const [section, v] of Object.entries<any>(s.after.sections)) {
@@ -66,13 +70,13 @@ describe("phrase plan", () => {
       expect(a.body.plan.find((e: any) => e.section === "Clarinets").writtenDynamic).toBe("p");
     }
 
-    const music = (await staff.get(`/api/shows/${ids.showId}/music`)).body;
+    const music = (await copy.client.get(`/api/shows/${copy.showId}/music`)).body;
     const row = music.assignments.find((a: any) => a.phraseId === phraseId && a.section === "Clarinets");
     expect(row).toMatchObject({ writtenDynamic: "p", playedDynamic: entries.find((e: any) => e.section === "Clarinets").playedDynamic });
 
-    expect((await ids.director.call("DELETE", planPath())).status).toBe(204);
+    expect((await copy.client.call("DELETE", copyPlanPath())).status).toBe(204);
     for (const s of proposal.sets) {
-      const a = await staff.get(`/api/shows/${ids.showId}/sets/${s.setId}/analysis?listeningPointId=${ids.pressBoxId}`);
+      const a = await copy.client.get(`/api/shows/${copy.showId}/sets/${s.setId}/analysis?listeningPointId=${copy.pressBoxId}`);
       expect(a.body.mix.voices.melody.dbA).toBeCloseTo(s.before.voices.melody.dbA, 6);
     }
   });

@@ -2,8 +2,9 @@
 // Runs in a program of its own (a copy of the demo show imported from its export), so other tests cannot disturb the check.
 import fc from "fast-check";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { APP_URL, Client, DEMO, signedIn, uniqueEmail } from "../support/api";
+import { APP_URL, type Client } from "../support/api";
 import { appDatabase } from "../support/database";
+import { copyDemoShow } from "../support/show-copy";
 
 const sql = appDatabase();
 afterAll(() => sql.end());
@@ -37,22 +38,11 @@ async function fingerprint(): Promise<string> {
 }
 
 beforeAll(async () => {
-  me = new Client();
-  const up = await me.post("/api/auth/sign-up", { name: "Fuzz Director", email: uniqueEmail("fuzz"), password: "fuzz-director-pass", programName: "Fuzz Band" });
-  programId = up.body.programId;
-  // Copy the demo show into the new program through the export and import routes.
-  const demo = await signedIn(DEMO.director);
-  const demoMe = await demo.get("/api/me");
-  const demoProgram = demoMe.body.memberships.find((m: any) => m.programName.startsWith("Harbor Ridge")).programId;
-  const demoShow = (await demo.get(`/api/programs/${demoProgram}/shows`)).body.shows[0].id;
-  const exported = await fetch(`${APP_URL}/api/shows/${demoShow}/export`, { headers: { cookie: demo.cookie! } });
-  const form = new FormData();
-  form.set("file", new Blob([await exported.text()], { type: "application/json" }), "show.json");
-  const imported = await fetch(`${APP_URL}/api/programs/${programId}/shows/import`, { method: "POST", body: form, headers: { cookie: me.cookie! } });
-  expect(imported.status).toBe(201);
-  showId = (await imported.json()).show.id;
-  const show = (await me.get(`/api/shows/${showId}`)).body;
-  setId = show.sets[1].id;
+  const copy = await copyDemoShow("fuzz");
+  me = copy.client;
+  programId = copy.programId;
+  showId = copy.showId;
+  setId = copy.show.sets[1].id;
   phraseId = (await me.get(`/api/shows/${showId}/music`)).body.phrases[0].id;
 }, 60_000);
 

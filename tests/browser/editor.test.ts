@@ -1,6 +1,7 @@
 // The field editor in headless Chromium: a designer drags a performer away from the box and the
 // box mix follows; staff cannot move anything; two sessions on one set get a conflict and lose
-// nothing; the browser preview agrees with the server's stored analysis. Screenshots go to .tmp/shots.
+// nothing; the browser preview agrees with the server's stored analysis; a failing balance check marks
+// its players. Screenshots go to .tmp/shots.
 import { mkdirSync } from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -33,7 +34,7 @@ const num = async (page: BrowserSession["page"], selector: string) => Number(awa
 describe("field editor", () => {
   it("a designer drags a performer away from the box: its contribution and its voice's level fall, and the move is kept", async () => {
     const { page, problems } = await open(DEMO.designer);
-    const setId = ids.setIds[8];
+    const setId = ids.setIds[10]; // outside the clarinet phrase (sets 7–8), which the balance suites read
     await openSet(page, ids.showId, setId);
     const before = await editorState(page);
     // A sounding player (melody if one stands clear) in front of the back hash, clear of the others.
@@ -121,7 +122,7 @@ describe("field editor", () => {
 
   it("staff see the set but cannot move anything, and no save is sent", async () => {
     const { page, problems } = await open(DEMO.staff);
-    const setId = ids.setIds[7];
+    const setId = ids.setIds[11];
     await openSet(page, ids.showId, setId);
     expect(await page.locator('[data-testid="read-only"]').isVisible()).toBe(true);
     expect(await page.locator('[data-testid="edit-tools"]').count()).toBe(0);
@@ -218,6 +219,41 @@ describe("field editor", () => {
     await page.waitForURL((u) => u.toString() !== url, { timeout: 30_000 });
     const show = await page.evaluate(async (u) => (await fetch(u)).json(), `/api/shows/${ids.showId}`);
     expect(show.sets.map((s: any) => s.id)).toEqual(ids.setIds);
+    expect(problems).toEqual([]);
+  });
+
+  it("choosing a failing balance check marks and selects its players on the field, and the legend explains the mark", async () => {
+    const { page, problems } = await open(DEMO.staff);
+    // The first demo set with a failing check at the press box that names players.
+    let found: { setId: string; check: { id: string; detail: string; performerIds: string[] } } | null = null;
+    for (const setId of ids.setIds) {
+      const a = await ids.director.get(`/api/shows/${ids.showId}/sets/${setId}/analysis?listeningPointId=${ids.pressBoxId}`);
+      const check = (a.body.checks as any[]).find((c) => !c.passed && c.performerIds.length > 0);
+      if (check) {
+        found = { setId, check };
+        break;
+      }
+    }
+    expect(found, "a demo set with a failing check that names players").toBeTruthy();
+    const { setId, check } = found!;
+    await openSet(page, ids.showId, setId);
+    const item = page.locator(`[data-testid="check-${check.id}"]`);
+    expect(await item.getAttribute("data-passed")).toBe("false");
+    expect(await item.textContent()).toContain("Fails"); // a word, not colour alone
+    expect(await item.textContent()).toContain(check.detail);
+    const state = () => page.evaluate(() => ({ flagged: window.__farfieldEditor!.flagged().sort(), selected: window.__farfieldEditor!.selected().sort() }));
+    expect((await state()).flagged).toEqual([]);
+    const button = item.getByRole("button");
+    await button.click();
+    const want = [...check.performerIds].sort();
+    await expect.poll(async () => (await state()).flagged).toEqual(want);
+    expect((await state()).selected).toEqual(want);
+    expect(await button.getAttribute("aria-pressed")).toBe("true");
+    expect(await page.locator('[data-testid="legend-flagged"]').textContent()).toContain("Dashed ring");
+    await page.screenshot({ path: path.join(SHOTS, "editor-laptop-check-marked.png") });
+    await button.click(); // choosing it again clears the mark
+    await expect.poll(async () => (await state()).flagged).toEqual([]);
+    expect(await page.locator('[data-testid="legend-flagged"]').count()).toBe(0);
     expect(problems).toEqual([]);
   });
 
