@@ -53,18 +53,23 @@ export interface PlanModel {
   residuals: Residual[];
 }
 
-/** A-weighted energy at the point of one player at every dynamic pp…fff, from its band levels at its own dynamic. */
-function energiesByDynamic(p: BoxPlayer, lwCache: Map<InstrumentSpec, number[][]>): Float64Array {
-  let lw = lwCache.get(p.spec);
-  if (!lw) {
-    lw = DYNAMICS.map((d) => Array.from({ length: BAND_COUNT }, (_, b) => instrumentLevelDb(p.spec, d, b)));
-    lwCache.set(p.spec, lw);
+/** A-weighted energy at the point of one player at every dynamic pp…fff, from its band levels at its own dynamic.
+ * The ratio of each dynamic's power to the player's own, per band, depends on the instrument only: cached per spec. */
+function energiesByDynamic(p: BoxPlayer, ratioCache: Map<InstrumentSpec, Float64Array[][]>): Float64Array {
+  let ratios = ratioCache.get(p.spec);
+  if (!ratios) {
+    const lw = DYNAMICS.map((d) => Array.from({ length: BAND_COUNT }, (_, b) => instrumentLevelDb(p.spec, d, b)));
+    // ratios[own][d][b] = 10^((Lw(d, b) − Lw(own, b)) / 10) · A-weighting energy of band b
+    ratios = lw.map((own) => lw.map((at) => Float64Array.from(at, (v, b) => 10 ** ((v - own[b]!) / 10) * A_WEIGHT_ENERGY[b]!)));
+    ratioCache.set(p.spec, ratios);
   }
-  const own = lw[DYNAMICS.indexOf(p.dynamic)]!;
+  const own = ratios[DYNAMICS.indexOf(p.dynamic)]!;
+  const band = Float64Array.from(p.bandsDb, (v) => 10 ** (v / 10));
   const out = new Float64Array(DYNAMICS.length);
   for (let d = 0; d <= TOP; d++) {
+    const r = own[d]!;
     let e = 0;
-    for (let b = 0; b < BAND_COUNT; b++) e += 10 ** ((p.bandsDb[b]! + lw[d]![b]! - own[b]!) / 10) * A_WEIGHT_ENERGY[b]!;
+    for (let b = 0; b < BAND_COUNT; b++) e += band[b]! * r[b]!;
     out[d] = e;
   }
   return out;
@@ -104,7 +109,7 @@ export function buildPlanModel(
   const unitOf = new Map<string, number>();
   units.forEach((u, i) => u.performerIds.forEach((id) => unitOf.set(`${u.section}\u0000${id}`, i)));
 
-  const lwCache = new Map<InstrumentSpec, number[][]>();
+  const ratioCache = new Map<InstrumentSpec, Float64Array[][]>();
   const playerUnit: number[] = [];
   const playerBase: number[] = [];
   const playerEnergy: Float64Array[] = [];
@@ -120,7 +125,7 @@ export function buildPlanModel(
       index.set(p, playerUnit.length);
       playerUnit.push(held ? -1 : unit!);
       playerBase.push(DYNAMICS.indexOf(p.dynamic));
-      playerEnergy.push(energiesByDynamic(p, lwCache));
+      playerEnergy.push(energiesByDynamic(p, ratioCache));
     }
     const group = (list: BoxPlayer[]) => {
       groups.push(list.map((p) => index.get(p)!));
@@ -203,22 +208,61 @@ export function buildPlanModel(
 }
 
 /** Sum of squared target residuals for whole steps k per unit: the fast path of the step search. */
-export function targetCostAtSteps(m: PlanModel, k: readonly number[]): number {
+/** Per group: the energy of its held players, and per unit playing in it the unit's summed energy at each step. */
+interface StepTables {
+  fixed: Float64Array;
+  units: Int32Array[];
+  /** tables[g][j][k - kMin] for unit units[g][j]. */
+  tables: Float64Array[][];
+}
+const stepTablesOf = new WeakMap<PlanModel, StepTables>();
+
+function stepTables(m: PlanModel): StepTables {
+  const cached = stepTablesOf.get(m);
+  if (cached) return cached;
   const G = m.groups.length;
-  const L = new Float64Array(G);
+  const t: StepTables = { fixed: new Float64Array(G), units: [], tables: [] };
   for (let g = 0; g < G; g++) {
-    let e = 0;
+    const byUnit = new Map<number, Float64Array>();
     for (let i = m.groupStart[g]!; i < m.groupStart[g + 1]!; i++) {
       const p = m.groupMembers[i]!;
       const u = m.playerUnit[p]!;
-      e += m.playerEnergy[p]![m.playerBase[p]! + (u >= 0 ? k[u]! : 0)]!;
+      if (u < 0) {
+        t.fixed[g]! += m.playerEnergy[p]![m.playerBase[p]!]!;
+        continue;
+      }
+      const unit = m.units[u]!;
+      let table = byUnit.get(u);
+      if (!table) byUnit.set(u, (table = new Float64Array(unit.kMax - unit.kMin + 1)));
+      for (let k = unit.kMin; k <= unit.kMax; k++) table[k - unit.kMin]! += m.playerEnergy[p]![m.playerBase[p]! + k]!;
+    }
+    t.units.push(Int32Array.from(byUnit.keys()));
+    t.tables.push([...byUnit.values()]);
+  }
+  stepTablesOf.set(m, t);
+  return t;
+}
+
+/** Sum of squared target residuals for whole steps k per unit; the polish calls it for every trial move,
+ * so each group's energy comes from per-unit step tables rather than from its players one by one. */
+export function targetCostAtSteps(m: PlanModel, k: readonly number[]): number {
+  const t = stepTables(m);
+  const G = m.groups.length;
+  const L = new Float64Array(G);
+  for (let g = 0; g < G; g++) {
+    let e = t.fixed[g]!;
+    const units = t.units[g]!;
+    const tables = t.tables[g]!;
+    for (let j = 0; j < units.length; j++) {
+      const u = units[j]!;
+      e += tables[j]![k[u]! - m.units[u]!.kMin]!;
     }
     L[g] = 10 * Math.log10(e);
   }
   let cost = 0;
   for (const r of m.residuals) {
     let v = r.c;
-    for (const t of r.terms) v += t.coef * L[t.group]!;
+    for (const term of r.terms) v += term.coef * L[term.group]!;
     if (v > 0) cost += v * v;
   }
   return cost;
