@@ -30,6 +30,8 @@ export interface FieldStageProps {
   dots: StageDot[];
   ghosts: { id: string; x: number; y: number }[];
   selected: ReadonlySet<string>;
+  /** Players marked by the balance check the user chose (a dashed outer ring, see the legend). */
+  flagged?: ReadonlySet<string>;
   /** Level of each performer relative to the loudest at the listening point (dB, ≤ 0). */
   relDb: Readonly<Record<string, number>>;
   listeningPoints: MarkedPoint[];
@@ -265,6 +267,7 @@ export default function FieldStage(props: FieldStageProps) {
             const at = toScreen(v, d.x, d.y);
             const f = facingVector(d.facingDeg);
             const sel = props.selected.has(d.id);
+            const flag = props.flagged?.has(d.id) ?? false;
             const halo = haloRadius(r, props.relDb[d.id]);
             return (
               <Group
@@ -280,7 +283,7 @@ export default function FieldStage(props: FieldStageProps) {
               >
                 <Circle name="halo" radius={halo} fill={d.style.colour} opacity={0.18} listening={false} perfectDrawEnabled={false} />
                 <Shape
-                  sceneFunc={(ctx) => drawSymbol(ctx, d, r, sel)}
+                  sceneFunc={(ctx) => drawSymbol(ctx, d, r, sel, flag)}
                   hitFunc={(ctx, shape) => {
                     ctx.beginPath();
                     ctx.arc(0, 0, r + 3, 0, Math.PI * 2);
@@ -357,10 +360,22 @@ function visibleLabels(dots: StageDot[], v: View, selected: ReadonlySet<string>)
 
 type Ctx = Parameters<NonNullable<Konva.ShapeConfig["sceneFunc"]>>[0];
 
-/** The performer's symbol: family shape, voice colour and outline, selection ring. */
-function drawSymbol(ctx: Ctx, d: StageDot, r: number, selected: boolean) {
+/** The performer's symbol: family shape, voice colour and outline, selection ring, check marker. */
+function drawSymbol(ctx: Ctx, d: StageDot, r: number, selected: boolean, flagged: boolean) {
   const c = ctx._context;
   const st = d.style;
+  if (flagged) {
+    // Dark dashes over a white ring, outside the selection ring: readable on grass and on any voice colour.
+    for (const [colour, width, dash] of [["#ffffff", 5, []], ["#1c2430", 2.5, [4, 3]]] as const) {
+      c.beginPath();
+      c.arc(0, 0, r + 8.5, 0, Math.PI * 2);
+      c.lineWidth = width;
+      c.strokeStyle = colour;
+      c.setLineDash([...dash]);
+      c.stroke();
+    }
+    c.setLineDash([]);
+  }
   if (selected) {
     c.beginPath();
     c.arc(0, 0, r + 4.5, 0, Math.PI * 2);

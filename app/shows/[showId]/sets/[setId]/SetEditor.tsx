@@ -22,6 +22,8 @@ import { copyFrom, face, fillBlock, mirrorSides, moveBy, nudge, snapToGrid, spre
 import { canRedo, canUndo, commit, historyOf, redo, undo, type History } from "@/lib/editor/history";
 import { layoutOf, rowsOf, withSpots, type Layout } from "@/lib/editor/layout";
 import { clickSelect, bandSelect } from "@/lib/editor/selection";
+import { CHECK_LABELS } from "../../music/voices";
+import { ChecksPanel } from "./ChecksPanel";
 import { EditTools, type FormCommand } from "./EditTools";
 import { editorKeys, useSet, useShow, type AnalysisResponse, type MixInputResponse } from "./editor-api";
 import { RosterPanel } from "./RosterPanel";
@@ -45,6 +47,11 @@ declare global {
       layout(): Layout;
       previewMix(): PreviewMix | null;
       storedMix(): AnalysisResponse | null;
+      selected(): string[];
+      /** Players marked on the field by the chosen balance check. */
+      flagged(): string[];
+      /** The count of the transition shown, or null when the field shows the set itself. */
+      shownCount(): number | null;
       frameTimes: number[];
     };
   }
@@ -52,7 +59,8 @@ declare global {
 
 const EMPTY: Layout = {};
 
-export function SetEditor({ showId, setId }: { showId: string; setId: string }) {
+/** `initialCount`: open on that count of the transition into the set (links from the timeline), paused. */
+export function SetEditor({ showId, setId, initialCount = null }: { showId: string; setId: string; initialCount?: number | null }) {
   const router = useRouter();
   const show = useShow(showId);
   const setData = useSet(showId, setId);
@@ -71,8 +79,11 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
   const [snap, setSnap] = useState(false);
   const [showGrid, setShowGrid] = useState(false);
   const [liveMix] = useState(createLiveMix);
-  const [playCount, setPlayCount] = useState<number | null>(null);
+  const [playCount, setPlayCount] = useState<number | null>(initialCount);
+  const [playing, setPlaying] = useState(false);
+  const [chosenCheck, setChosenCheck] = useState<string | null>(null);
   const frameTimes = useRef<number[]>([]);
+  const fieldBox = useRef<HTMLDivElement>(null);
 
   const listeningPoints = show.data?.listeningPoints ?? [];
   const lpId = pointId ?? listeningPoints.find((l) => l.name === "Press box")?.id ?? listeningPoints[0]?.id ?? null;
@@ -114,12 +125,14 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
   const counts = sets[index]?.counts ?? 0;
   const playLayout = useMemo(() => {
     if (playCount === null || !previous.data) return null;
-    return layoutOf(positionsAtCount(previous.data.positions, rowsOf(layout), playCount, Math.max(1, counts)));
+    return layoutOf(positionsAtCount(previous.data.positions, rowsOf(layout), Math.min(playCount, counts), Math.max(1, counts)));
   }, [playCount, previous.data, layout, counts]);
+  // A count asked for in the address means nothing for the first set (no transition into it).
+  const shownCount = playLayout ? Math.min(playCount!, counts) : null;
   const shown = playLayout ?? layout;
 
   const previewMix = useMemo(() => (preview ? preview.mixFor(shown) : null), [preview, shown]);
-  const stored = analysis.data && !saver.dirty && playCount === null && mixInput.data && !mixInput.isValidating ? analysis.data : null;
+  const stored = analysis.data && !saver.dirty && shownCount === null && mixInput.data && !mixInput.isValidating ? analysis.data : null;
   const mix: MixFigures | null = stored ? stored.mix : previewMix;
   const perPerformer: Record<string, number> = useMemo(() => {
     if (stored) return Object.fromEntries(stored.mix.performers.flatMap((p) => (p.dbA === null ? [] : [[p.performerId, p.dbA]])));
@@ -134,6 +147,9 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
       layout: () => layout,
       previewMix: () => (preview ? preview.mixFor(layout) : null),
       storedMix: () => analysis.data ?? null,
+      selected: () => selected,
+      flagged: () => [...flagged],
+      shownCount: () => shownCount,
       frameTimes: frameTimes.current,
     };
   });
@@ -153,7 +169,7 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
       }),
     [shown, byId, catalog, voiceOf],
   );
-  const ghosts = useMemo(() => (previous.data && playCount === null ? previous.data.positions.map((p) => ({ id: p.performerId, x: p.x, y: p.y })) : []), [previous.data, playCount]);
+  const ghosts = useMemo(() => (previous.data && shownCount === null ? previous.data.positions.map((p) => ({ id: p.performerId, x: p.x, y: p.y })) : []), [previous.data, shownCount]);
 
   /** One edit: changes computed from the latest layout (key repeats never work on a stale one). */
   const apply = useCallback(
@@ -168,6 +184,18 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
   );
 
   const selectedSet = useMemo(() => new Set(selected), [selected]);
+  // The chosen check's players, from the latest stored analysis (it follows saves: a fixed check marks no one).
+  const chosen = analysis.data?.checks.find((c) => c.id === chosenCheck && !c.passed) ?? null;
+  const flagged = useMemo(() => new Set(chosen?.performerIds ?? []), [chosen]);
+  const chooseCheck = (id: string | null) => {
+    setChosenCheck(id);
+    const ids = analysis.data?.checks.find((c) => c.id === id)?.performerIds ?? [];
+    if (!id) return;
+    setSelected(ids.filter((p) => layout[p]));
+    // On a tablet the panel sits below the field: bring the marked players into view.
+    const box = fieldBox.current?.getBoundingClientRect();
+    if (box && (box.bottom < 0 || box.top > window.innerHeight)) fieldBox.current!.scrollIntoView({ behavior: "smooth", block: "start" });
+  };
   const onForm = (cmd: FormCommand) => {
     const prev = previous.data ? layoutOf(previous.data.positions) : EMPTY;
     const fn = { line: spreadAlongLine, arc: spreadAlongArc, mirror: mirrorSides, snap: snapToGrid, "copy-previous": (_: Layout, ids: readonly string[]) => copyFrom(prev, ids) }[cmd];
@@ -201,22 +229,26 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
       } else if (e.key === "Escape") {
         setPlacingId(null);
         setSelected([]);
+        setChosenCheck(null);
       }
     };
     window.addEventListener("keydown", onKey);
     return () => window.removeEventListener("keydown", onKey);
   });
 
-  // Transition playback: one count every half second (120 beats a minute).
+  // Transition playback: one count every half second (120 beats a minute); paused on a count from the address.
   useEffect(() => {
-    if (playCount === null) return;
+    if (playCount === null || !playing) return;
     if (playCount >= counts) {
-      const t = setTimeout(() => setPlayCount(null), 900);
+      const t = setTimeout(() => {
+        setPlayCount(null);
+        setPlaying(false);
+      }, 900);
       return () => clearTimeout(t);
     }
     const t = setTimeout(() => setPlayCount((c) => (c === null ? null : c + 1)), 500);
     return () => clearTimeout(t);
-  }, [playCount, counts]);
+  }, [playCount, counts, playing]);
 
   if (show.error) return <ErrorState error={show.error} what="show" onRetry={() => show.mutate()} />;
   if (setData.error) return <ErrorState error={setData.error} what="set" onRetry={() => setData.mutate()} />;
@@ -237,6 +269,9 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h1 className="text-2xl font-bold">
           Set {current?.number ?? setData.data.set.number} <span className="text-base font-normal text-ink-soft">{counts} counts from the previous set</span>
+          {shownCount !== null && !playing ? (
+            <span className="ml-2 rounded-full bg-[#fff3d6] px-2 py-0.5 align-middle text-sm font-semibold text-signal-warn">Shown at count {shownCount} of {counts} from set {sets[index - 1]?.number}</span>
+          ) : null}
         </h1>
         <div className="flex items-center gap-3 text-sm">
           {listeningPoints.length > 1 ? (
@@ -344,17 +379,19 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
       />
 
       <div className="grid gap-3 lg:grid-cols-[minmax(0,1fr)_20rem]">
-        <div className="flex min-w-0 flex-col gap-2">
-          <div className="h-[min(62vh,560px)] min-h-[320px]">
+        {/* On wide screens the field stays in view while the side panel scrolls (choosing a check marks players on it). */}
+        <div className="flex min-w-0 flex-col gap-2 lg:sticky lg:top-2 lg:self-start">
+          <div ref={fieldBox} className="h-[min(62vh,560px)] min-h-[320px]">
             <FieldCanvas
               rules={show.data.show.fieldRules}
               dots={dots}
               ghosts={ghosts}
               selected={selectedSet}
+              flagged={flagged}
               relDb={relDb}
               listeningPoints={listeningPoints}
               selectedPointId={lpId}
-              editable={editable && playCount === null}
+              editable={editable && shownCount === null}
               showGrid={showGrid}
               snap={snap}
               placing={Boolean(placingId)}
@@ -383,22 +420,31 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
               }}
             />
           </div>
-          <Legend />
+          <Legend flaggedBy={chosen ? (CHECK_LABELS[chosen.id] ?? chosen.id) : null} />
           {previous.data ? (
             <div className="flex flex-wrap items-center gap-2 text-sm">
               <span className="text-ink-soft">Set {sets[index - 1]?.number} shown faintly, with each performer&apos;s path.</span>
               <button
                 type="button"
                 className="min-h-9 rounded-md border border-ink/20 bg-paper-raised px-3 font-semibold hover:bg-paper-sunk"
-                onClick={() => setPlayCount(playCount === null ? 0 : null)}
+                onClick={() => {
+                  if (playing) setPlayCount(null);
+                  else setPlayCount(shownCount ?? 0);
+                  setPlaying(!playing);
+                }}
                 data-testid="play-transition"
               >
-                {playCount === null ? `Play the ${counts} counts from set ${sets[index - 1]?.number}` : "Stop"}
+                {playing ? "Stop" : shownCount !== null ? `Play on from count ${shownCount}` : `Play the ${counts} counts from set ${sets[index - 1]?.number}`}
               </button>
-              {playCount !== null ? (
-                <span className="font-semibold tabular-nums" aria-live="polite">
-                  Count {playCount} of {counts}
+              {shownCount !== null ? (
+                <span className="font-semibold tabular-nums" aria-live="polite" data-testid="shown-count">
+                  Count {shownCount} of {counts}
                 </span>
+              ) : null}
+              {shownCount !== null && !playing ? (
+                <button type="button" className="min-h-9 rounded-md border border-ink/20 bg-paper-raised px-3 font-semibold hover:bg-paper-sunk" onClick={() => setPlayCount(null)}>
+                  Show set {current?.number}
+                </button>
               ) : null}
             </div>
           ) : null}
@@ -417,6 +463,7 @@ export function SetEditor({ showId, setId }: { showId: string; setId: string }) 
             />
           </div>
           <LiveMixPanel live={liveMix} mix={mix} source={!mix ? "loading" : stored ? "stored" : "preview"} pointName={point?.name ?? "the listening point"} computedAt={stored?.computedAt} />
+          <ChecksPanel showId={showId} analysis={analysis.data ?? null} pointName={point?.name ?? "the listening point"} chosen={chosen?.id ?? null} stale={!stored} onChoose={chooseCheck} />
           <div className="rounded-xl border border-ink/10 bg-paper-raised p-4 shadow-sm">
             <RosterPanel
               unplaced={unplaced}

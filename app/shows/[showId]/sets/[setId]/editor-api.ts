@@ -2,7 +2,7 @@
 // What the field editor reads (SWR, one key per resource) and the answers' shapes.
 import type { ShowResponse } from "@/components/api-types";
 import { apiKeys, useApi } from "@/components/use-api";
-import type { AnalysisInput } from "@/lib/acoustics/types";
+import type { AnalysisInput, CheckResult, Dynamic, PlanEntry } from "@/lib/acoustics/types";
 import type { PositionRow } from "@/lib/editor/layout";
 import type { MixFigures } from "@/components/field/MixPanel";
 
@@ -14,6 +14,8 @@ export type AnalysisResponse = {
   computedAt: string;
   reused: boolean;
   mix: MixFigures & { performers: { performerId: string; dbA: number | null; arrivalMs: number }[] };
+  checks: CheckResult[];
+  plan: (PlanEntry & { atLimit?: Extract<Dynamic, "pp" | "fff">; unreachable?: string[] })[];
 };
 
 const setPath = (showId: string, setId: string) => `/api/shows/${encodeURIComponent(showId)}/sets/${encodeURIComponent(setId)}`;
