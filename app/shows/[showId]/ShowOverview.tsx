@@ -7,6 +7,7 @@ import { ErrorState } from "@/components/ErrorState";
 import { plural } from "@/components/format";
 import { PageTitle } from "@/components/PageTitle";
 import { RoleBadge } from "@/components/RoleBadge";
+import { ShowNav } from "@/components/ShowNav";
 import { SkeletonBar, SkeletonCard } from "@/components/Skeleton";
 import { apiKeys, useApi } from "@/components/use-api";
 import { can } from "@/lib/auth/permissions";
@@ -40,6 +41,7 @@ export function ShowOverview({ showId }: { showId: string }) {
   return (
     <>
       <Breadcrumbs items={crumbs} />
+      <ShowNav showId={s.id} />
       <PageTitle
         sub={`${plural(performers.length, "performer")} · ${plural(sets.length, "set")} · ${plural(listeningPoints.length, "listening point")}`}
         aside={
@@ -52,7 +54,6 @@ export function ShowOverview({ showId }: { showId: string }) {
         {s.name}
       </PageTitle>
       <div className="space-y-6">
-        <nav aria-label="Balance" className="flex flex-wrap gap-3">{[["music", "Music and balance plan"], ["timeline", "Show timeline"], ["compare", "Set compare"], ["rehearsal", "Stadium rehearsal"], ["sheets", "Coordinate sheets"], ["imports", "Imports"]].map(([p, label]) => <a key={p} href={`/shows/${s.id}/${p}`} className="inline-flex min-h-11 items-center rounded-lg border border-ink-soft/40 bg-paper-raised px-4 font-semibold text-turf-dark hover:border-ink">{label}</a>)}</nav>
         <Card title="Sets" titleId="sets-title">
           <SetsStrip showId={s.id} sets={sets} />
         </Card>

@@ -8,6 +8,7 @@ import { ErrorState } from "@/components/ErrorState";
 import { PageTitle } from "@/components/PageTitle";
 import { SkeletonCard } from "@/components/Skeleton";
 import { apiKeys, useApi } from "@/components/use-api";
+import { ShowNav } from "@/components/ShowNav";
 import { CHECK_LABELS, VOICE_LABELS, formatDb } from "../music/voices";
 import { MiniField } from "./MiniField";
 
@@ -48,6 +49,7 @@ export function CompareView({ showId, initialA, initialB }: { showId: string; in
   return (
     <>
       <Breadcrumbs items={crumbs} />
+      <ShowNav showId={showId} />
       <PageTitle sub="Two sets' predicted box mixes side by side. Predictions are estimates, not measurements.">Set compare</PageTitle>
       <div className="mb-6 flex flex-wrap items-end gap-4">
         <label className="flex flex-col text-sm">From set<select className={sel} value={aId ?? ""} onChange={(e) => { setA(e.target.value); setB(null); }}>{sets.map((s) => <option key={s.id} value={s.id}>{s.number}</option>)}</select></label>

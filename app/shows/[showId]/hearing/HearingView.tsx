@@ -11,6 +11,7 @@ import { PageTitle } from "@/components/PageTitle";
 import { SkeletonCard } from "@/components/Skeleton";
 import { SortableTable, type Column } from "@/components/SortableTable";
 import { apiKeys, useApi } from "@/components/use-api";
+import { ShowNav } from "@/components/ShowNav";
 import { HearingCautions } from "./HearingCautions";
 import { HearingField } from "./HearingField";
 import { LEVEL_STEPS, levelStep, type HearingPerformer, type HearingResponse } from "./hearing-types";
@@ -65,6 +66,7 @@ export function HearingView({ showId }: { showId: string }) {
   return (
     <>
       <Breadcrumbs items={crumbs} />
+      <ShowNav showId={showId} />
       <PageTitle sub="The estimated level at each performer's ears (1.6 m) from every other player in the set, and the noise dose of a rehearsal at that level.">Hearing map</PageTitle>
       <div className="space-y-6">
         <HearingCautions criteria={map.data?.criteria ?? { niosh: { levelDbA: 85, hours: 8, exchangeDb: 3, source: "NIOSH 98-126 (1998)" }, osha: { levelDbA: 90, hours: 8, exchangeDb: 5, source: "OSHA 29 CFR 1910.95" } }} anyOver={over.length > 0} />

@@ -9,6 +9,7 @@ import { apiErrorFrom, ApiError, sendJson } from "@/components/fetcher";
 import { FormMessage } from "@/components/FormMessage";
 import { PageTitle } from "@/components/PageTitle";
 import { useApi } from "@/components/use-api";
+import { ShowNav } from "@/components/ShowNav";
 import { PreviewPanel, type Preview } from "./PreviewPanel";
 
 type Upload = { id: string; kind: string; fileName: string; sizeBytes: number; uploadedAt: string; uploadedBy: string | null; confirmedAt: string | null };
@@ -67,6 +68,7 @@ export function ImportsView({ showId }: { showId: string }) {
   return (
     <>
       <Breadcrumbs items={[{ label: "Programs", href: "/programs" }, { label: name, href: `/shows/${showId}` }, { label: "Imports" }]} />
+      <ShowNav showId={showId} />
       <PageTitle sub="Bring a roster or a drill in from a spreadsheet. Nothing changes until you confirm.">Imports</PageTitle>
       <div className="grid items-start gap-6 lg:grid-cols-[2fr_3fr]">
         <Card title="Upload a CSV file" titleId="upload-title">

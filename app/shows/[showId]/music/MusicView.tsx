@@ -8,6 +8,7 @@ import { ErrorState } from "@/components/ErrorState";
 import { PageTitle } from "@/components/PageTitle";
 import { SkeletonCard } from "@/components/Skeleton";
 import { apiKeys, useApi } from "@/components/use-api";
+import { ShowNav } from "@/components/ShowNav";
 import type { MusicResponse } from "./music-types";
 import { OverridesPanel } from "./OverridesPanel";
 import { PhraseTable } from "./PhraseTable";
@@ -39,6 +40,7 @@ export function MusicView({ showId, initialPhraseId }: { showId: string; initial
   return (
     <>
       <Breadcrumbs items={crumbs} />
+      <ShowNav showId={showId} />
       <PageTitle sub={`${m.phrases.length} phrases over ${m.sets.length} sets${m.canEdit ? "" : " · read only"}`}>Music</PageTitle>
       <Card title="Phrases" titleId="phrases-title">
         <ul className="flex flex-wrap gap-2" aria-label="Phrases">

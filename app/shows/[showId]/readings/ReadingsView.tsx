@@ -8,6 +8,7 @@ import { ErrorState } from "@/components/ErrorState";
 import { SkeletonCard } from "@/components/Skeleton";
 import { PageTitle } from "@/components/PageTitle";
 import { apiKeys, useApi } from "@/components/use-api";
+import { ShowNav } from "@/components/ShowNav";
 import { can } from "@/lib/auth/permissions";
 import { CatalogHistory } from "./CatalogHistory";
 import { CsvUpload } from "./CsvUpload";
@@ -53,6 +54,7 @@ export function ReadingsView({ showId }: { showId: string }) {
   return (
     <>
       <Breadcrumbs items={crumbs} />
+      <ShowNav showId={showId} />
       <PageTitle sub="Sound level meter readings at a listening point, with a section (or a few) playing at a known dynamic. Farfield fits each instrument's outdoor carry to them.">
         Box readings
       </PageTitle>

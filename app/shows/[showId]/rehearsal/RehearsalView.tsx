@@ -11,6 +11,7 @@ import { FormMessage } from "@/components/FormMessage";
 import { PageTitle } from "@/components/PageTitle";
 import { ROLE_WORDS } from "@/components/RoleBadge";
 import { useApi } from "@/components/use-api";
+import { ShowNav } from "@/components/ShowNav";
 import type { Role } from "@/lib/auth/permissions";
 import type { RehearsalItem } from "@/lib/rehearsal/plan";
 
@@ -81,6 +82,7 @@ export function RehearsalView({ showId, initial }: { showId: string; initial: { 
     <>
       <div className="no-print">
         <Breadcrumbs items={[{ label: "Programs", href: "/programs" }, { label: o?.show.name ?? "Show", href: `/shows/${showId}` }, { label: "Stadium rehearsal" }]} />
+        <ShowNav showId={showId} />
         <PageTitle sub="Pick what to rehearse with the stadium time you have. The worst balance comes first.">Stadium rehearsal plan</PageTitle>
         {!o ? (
           <p role="status">Loading the show…</p>

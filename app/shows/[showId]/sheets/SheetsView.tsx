@@ -6,6 +6,7 @@ import { Button, buttonClass } from "@/components/Button";
 import { ErrorState } from "@/components/ErrorState";
 import { PageTitle } from "@/components/PageTitle";
 import { useApi } from "@/components/use-api";
+import { ShowNav } from "@/components/ShowNav";
 import type { FieldRules } from "@/lib/field/geometry";
 import type { PerformerSheet, SetSheet } from "@/lib/sheets/coordinates";
 import { FieldDrawing } from "./FieldDrawing";
@@ -28,6 +29,7 @@ export function SheetsView({ showId, by }: { showId: string; by: "performers" | 
     <>
       <div className="no-print">
         <Breadcrumbs items={[{ label: "Programs", href: "/programs" }, { label: name, href: `/shows/${showId}` }, { label: "Coordinate sheets" }]} />
+        <ShowNav showId={showId} />
         <PageTitle sub={`Steps are 8 to 5 (22.5 in). ${data ? RULES_WORDS[data.show.fieldRules] : ""}. Side 1 is on the left seen from the press box.`}>Coordinate sheets</PageTitle>
         <div className="mb-6 flex flex-wrap items-center gap-3">
           {tab("performers", "A sheet per performer")}

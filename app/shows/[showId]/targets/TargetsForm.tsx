@@ -12,6 +12,7 @@ import { SkeletonCard } from "@/components/Skeleton";
 import { TextField } from "@/components/TextField";
 import { apiKeys, useApi } from "@/components/use-api";
 import type { ShowResponse } from "@/components/api-types";
+import { ShowNav } from "@/components/ShowNav";
 import { TARGET_FIELDS, type TargetKey } from "./target-fields";
 
 type TargetsResponse = {
@@ -75,6 +76,7 @@ export function TargetsForm({ showId }: { showId: string }) {
   return (
     <>
       <Breadcrumbs items={crumbs} />
+      <ShowNav showId={showId} />
       <PageTitle sub="The thresholds the balance checks and the balance plan use for this show.">Balance targets</PageTitle>
       <Card title="Thresholds" titleId="targets-title">
         <form onSubmit={submit} className="space-y-5" aria-describedby="targets-status">

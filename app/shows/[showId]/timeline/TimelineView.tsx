@@ -10,6 +10,7 @@ import { ErrorState } from "@/components/ErrorState";
 import { PageTitle } from "@/components/PageTitle";
 import { SkeletonCard } from "@/components/Skeleton";
 import { apiKeys, useApi } from "@/components/use-api";
+import { ShowNav } from "@/components/ShowNav";
 import { CHECK_LABELS, VOICE_LABELS, formatDb } from "../music/voices";
 import type { TimelineResponse, TimelineSample } from "./timeline-types";
 import { VoiceChart } from "./VoiceChart";
@@ -48,6 +49,7 @@ export function TimelineView({ showId }: { showId: string }) {
   return (
     <>
       <Breadcrumbs items={crumbs} />
+      <ShowNav showId={showId} />
       <PageTitle
         sub="Each voice's predicted level at the listening point, count by count. Predictions are estimates, not measurements."
         aside={

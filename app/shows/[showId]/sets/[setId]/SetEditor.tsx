@@ -6,6 +6,7 @@ import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { flushSync } from "react-dom";
 import { mutate } from "swr";
 import { Breadcrumbs } from "@/components/Breadcrumbs";
+import { ShowNav } from "@/components/ShowNav";
 import { ErrorState } from "@/components/ErrorState";
 import { SkeletonCard } from "@/components/Skeleton";
 import { sendJson } from "@/components/fetcher";
@@ -266,6 +267,7 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
   return (
     <div className="flex flex-col gap-3">
       <Breadcrumbs items={[{ label: "Programs", href: "/programs" }, { label: show.data.show.name, href: `/shows/${showId}` }, { label: `Set ${current?.number ?? setData.data.set.number}` }]} />
+      <ShowNav showId={showId} />
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h1 className="text-2xl font-bold">
           Set {current?.number ?? setData.data.set.number} <span className="text-base font-normal text-ink-soft">{counts} counts from the previous set</span>
