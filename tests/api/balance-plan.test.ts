@@ -71,7 +71,7 @@ describe("phrase plan", () => {
     }
 
     const music = (await copy.client.get(`/api/shows/${copy.showId}/music`)).body;
-    const row = music.assignments.find((a: any) => a.phraseId === phraseId && a.section === "Clarinets");
+    const row = music.assignments.find((a: any) => a.phraseId === copyPhraseId && a.section === "Clarinets");
     expect(row).toMatchObject({ writtenDynamic: "p", playedDynamic: entries.find((e: any) => e.section === "Clarinets").playedDynamic });
 
     expect((await copy.client.call("DELETE", copyPlanPath())).status).toBe(204);
