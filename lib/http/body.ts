@@ -21,8 +21,6 @@ export function parseWith<T extends z.ZodType>(schema: T, value: unknown, what =
 }
 
 export async function readJson<T extends z.ZodType>(req: Request, schema: T, maxBytes = MAX_JSON_BYTES): Promise<z.infer<T>> {
-  const declared = Number(req.headers.get("content-length") ?? "0");
-  if (declared > maxBytes) throw tooLarge();
   const text = await readTextLimited(req, maxBytes);
   let value: unknown;
   try {
@@ -33,8 +31,10 @@ export async function readJson<T extends z.ZodType>(req: Request, schema: T, max
   return parseWith(schema, value, "The request body");
 }
 
-async function readTextLimited(req: Request, maxBytes: number): Promise<string> {
-  if (!req.body) return "";
+/** The raw body, refused with 413 (and `message`) once it passes `maxBytes`, whatever Content-Length claims. */
+export async function readBytesLimited(req: Request, maxBytes: number, message?: string): Promise<Buffer> {
+  if (Number(req.headers.get("content-length") ?? "0") > maxBytes) throw tooLarge(message);
+  if (!req.body) return Buffer.alloc(0);
   const reader = req.body.getReader();
   const chunks: Uint8Array[] = [];
   let size = 0;
@@ -44,9 +44,13 @@ async function readTextLimited(req: Request, maxBytes: number): Promise<string> 
     size += value.byteLength;
     if (size > maxBytes) {
       await reader.cancel();
-      throw tooLarge();
+      throw tooLarge(message);
     }
     chunks.push(value);
   }
-  return new TextDecoder("utf-8", { fatal: false }).decode(Buffer.concat(chunks));
+  return Buffer.concat(chunks);
+}
+
+async function readTextLimited(req: Request, maxBytes: number): Promise<string> {
+  return new TextDecoder("utf-8", { fatal: false }).decode(await readBytesLimited(req, maxBytes));
 }

@@ -1,4 +1,5 @@
 // Reading one file from a multipart/form-data request, with the size limit applied while reading.
+import { readBytesLimited } from "./body";
 import { badRequest, tooLarge } from "./errors";
 
 export interface UploadedFile {
@@ -10,31 +11,12 @@ export interface UploadedFile {
 // Room for the multipart boundaries and the small text fields next to the file.
 const ENVELOPE_BYTES = 16_384;
 
-async function readLimited(req: Request, limit: number, message: string): Promise<Buffer> {
-  if (Number(req.headers.get("content-length") ?? "0") > limit) throw tooLarge(message);
-  if (!req.body) return Buffer.alloc(0);
-  const reader = req.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let size = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    size += value.byteLength;
-    if (size > limit) {
-      await reader.cancel();
-      throw tooLarge(message);
-    }
-    chunks.push(value);
-  }
-  return Buffer.concat(chunks);
-}
-
 /** The file under `field` and the other text fields; 413 past `maxFileBytes`, 400 when there is no file. */
 export async function readUpload(req: Request, maxFileBytes: number, field = "file"): Promise<UploadedFile> {
   const type = req.headers.get("content-type") ?? "";
   if (!type.toLowerCase().startsWith("multipart/form-data")) throw badRequest("Send the file as multipart/form-data with a field named \"file\".");
   const message = `The file is larger than ${Math.round(maxFileBytes / 1000)} kB; split it or remove what is not needed.`;
-  const raw = await readLimited(req, maxFileBytes + ENVELOPE_BYTES, message);
+  const raw = await readBytesLimited(req, maxFileBytes + ENVELOPE_BYTES, message);
   let form: FormData;
   try {
     form = await new Response(new Uint8Array(raw), { headers: { "content-type": type } }).formData();
