@@ -52,8 +52,9 @@ function median(samples: number[]): number {
 }
 /** Median time (ms) of one call, from `samples` batches of `batch` calls. */
 function time(fn: () => void, samples: number, batch: number): number {
-  // Warm up until the JIT has optimised the hot paths, as in a long-running server (a few hundred calls).
-  for (let i = 0; i < Math.max(batch * 5, 400); i++) fn();
+  // Warm up for at least 300 ms, so the JIT has optimised the hot paths as in a long-running server.
+  const warmUntil = performance.now() + 300;
+  for (let i = 0; i < batch * 5 || performance.now() < warmUntil; i++) fn();
   const out: number[] = [];
   for (let s = 0; s < samples; s++) {
     const t0 = performance.now();
