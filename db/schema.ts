@@ -272,42 +272,33 @@ export const performerOverrides = pgTable(
 );
 export type PerformerOverride = typeof performerOverrides.$inferSelect;
 
-// Stored box mixes: reused while the hash of their inputs and the model version are unchanged.
+// A computed result per set and listening point, reused while the hash of its inputs and the model version are unchanged.
+const storedResultColumns = () => ({
+  setId: uuid("set_id")
+    .notNull()
+    .references(() => sets.id, { onDelete: "cascade" }),
+  listeningPointId: uuid("listening_point_id")
+    .notNull()
+    .references(() => listeningPoints.id, { onDelete: "cascade" }),
+  inputsHash: text("inputs_hash").notNull(),
+  modelVersion: text("model_version").notNull(),
+  result: jsonb("result").notNull(),
+  computedAt: timestamp("computed_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+});
+
+// Stored box mixes, with their balance checks and plan.
 export const analyses = pgTable(
   "analyses",
-  {
-    setId: uuid("set_id")
-      .notNull()
-      .references(() => sets.id, { onDelete: "cascade" }),
-    listeningPointId: uuid("listening_point_id")
-      .notNull()
-      .references(() => listeningPoints.id, { onDelete: "cascade" }),
-    inputsHash: text("inputs_hash").notNull(),
-    modelVersion: text("model_version").notNull(),
-    result: jsonb("result").notNull(),
-    computedAt: timestamp("computed_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
-  },
+  storedResultColumns(),
   (t) => [primaryKey({ columns: [t.setId, t.listeningPointId] })],
 );
 export type Analysis = typeof analyses.$inferSelect;
-
 
 // Stored transition sweeps: the box levels and failing checks at every count into a set, reused
 // while the hash of their inputs (both sets' positions, the voicing, conditions, catalog, targets) is unchanged.
 export const balanceSweeps = pgTable(
   "balance_sweeps",
-  {
-    setId: uuid("set_id")
-      .notNull()
-      .references(() => sets.id, { onDelete: "cascade" }),
-    listeningPointId: uuid("listening_point_id")
-      .notNull()
-      .references(() => listeningPoints.id, { onDelete: "cascade" }),
-    inputsHash: text("inputs_hash").notNull(),
-    modelVersion: text("model_version").notNull(),
-    result: jsonb("result").notNull(),
-    computedAt: timestamp("computed_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
-  },
+  storedResultColumns(),
   (t) => [primaryKey({ columns: [t.setId, t.listeningPointId] })],
 );
 export type BalanceSweep = typeof balanceSweeps.$inferSelect;
