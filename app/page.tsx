@@ -1,5 +1,5 @@
 import { redirect } from "next/navigation";
-import { currentUserOrNull } from "@/components/require-session";
+import { currentUserOrNull } from "@/lib/auth/page-session";
 
 /** The front door: your programs when signed in, else the sign-in page. */
 export default async function Home() {

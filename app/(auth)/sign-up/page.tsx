@@ -3,7 +3,7 @@ import Link from "next/link";
 import { redirect } from "next/navigation";
 import { AuthFrame } from "@/components/AuthFrame";
 import { safeNextPath } from "@/components/next-path";
-import { currentUserOrNull } from "@/components/require-session";
+import { currentUserOrNull } from "@/lib/auth/page-session";
 import { SignUpForm } from "./SignUpForm";
 
 export const metadata: Metadata = { title: "Create an account" };

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { PageShell } from "@/components/PageShell";
-import { requireSignedIn } from "@/components/require-session";
+import { requireSignedIn } from "@/lib/auth/page-session";
 import { mailboxEnabled } from "@/lib/auth/mailbox-access";
 import { MailboxView } from "./MailboxView";
 

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { PageShell } from "@/components/PageShell";
-import { requireSignedIn } from "@/components/require-session";
+import { requireSignedIn } from "@/lib/auth/page-session";
 import { TargetsForm } from "./TargetsForm";
 
 export const metadata: Metadata = { title: "Balance targets" };

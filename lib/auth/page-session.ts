@@ -1,10 +1,10 @@
 // The page gate: a signed-in user, or a redirect to the sign-in page that comes back here.
 import "server-only";
 import { redirect } from "next/navigation";
-import { getCurrentSession } from "@/lib/auth/session";
+import { getCurrentSession } from "./session";
 import { isDatabaseDown } from "@/lib/http/errors";
-import { signInPath } from "./next-path";
-import { databaseDownError } from "./page-errors";
+import { signInPath } from "@/components/next-path";
+import { databaseDownError } from "@/components/page-errors";
 
 /** The session, with a database outage turned into an error the error page can name. */
 export async function currentUserOrNull() {
