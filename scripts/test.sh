@@ -10,6 +10,7 @@ ensure_postgres
 ensure_chromium
 command -v pdftoppm >/dev/null || apt_install poppler-utils # renders the PDF sheets in the tests
 
+mkdir -p "$ROOT/.tmp"
 # The fake SMTP server keeps what the app sends in a folder of this run (tests read it); it exits with this script.
 export SMTP_HOST=127.0.0.1 SMTP_PORT="$(free_port)" DEV_MAILBOX=true MAIL_DIR="$ROOT/.tmp/mail-test-$$"
 FAKE_SMTP_WATCH_PID=$$ npx tsx scripts/fake-smtp.ts >"$ROOT/.tmp/fake-smtp.log" 2>&1 &
