@@ -1,52 +1,27 @@
 "use client";
 // Posts the e-mail and password as JSON; shows field errors and the API's message; never refills the password.
 import { useRouter } from "next/navigation";
-import { useRef, useState, type FormEvent } from "react";
+import { useState } from "react";
 import { Button } from "@/components/Button";
-import { ApiError, sendJson } from "@/components/fetcher";
 import { FormMessage } from "@/components/FormMessage";
 import { TextField } from "@/components/TextField";
-import { fieldIssues } from "@/lib/http/body";
+import { usePasswordForm } from "@/components/use-password-form";
 import { signInSchema } from "@/lib/validation/auth";
-
-type Issues = Record<string, string[]>;
 
 export function SignInForm({ next }: { next: string }) {
   const router = useRouter();
-  const password = useRef<HTMLInputElement>(null);
   const [email, setEmail] = useState("");
-  const [issues, setIssues] = useState<Issues>({});
-  const [message, setMessage] = useState("");
-  const [status, setStatus] = useState<"idle" | "pending" | "done">("idle");
-
-  async function onSubmit(event: FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    const input = { email, password: password.current?.value ?? "" };
-    const parsed = signInSchema.safeParse(input);
-    if (!parsed.success) {
-      setIssues(fieldIssues(parsed.error));
-      setMessage("Check the highlighted fields.");
-      return;
-    }
-    setStatus("pending");
-    setIssues({});
-    setMessage("Signing in…");
-    try {
-      await sendJson("/api/auth/sign-in", "POST", parsed.data);
-      setStatus("done");
-      setMessage("Signed in. Opening your programs…");
+  const { password, issues, message, status, pending, submitWith } = usePasswordForm({
+    schema: signInSchema,
+    url: "/api/auth/sign-in",
+    text: { pending: "Signing in…", done: "Signed in. Opening your programs…", failed: "Signing in failed. Try again." },
+    onDone: () => {
       router.replace(next);
       router.refresh();
-    } catch (err) {
-      if (password.current) password.current.value = "";
-      setStatus("idle");
-      setIssues(err instanceof ApiError ? err.issues : {});
-      setMessage(err instanceof ApiError ? err.message : "Signing in failed. Try again.");
-      password.current?.focus();
-    }
-  }
-
-  const pending = status !== "idle";
+    },
+    focusPasswordOnError: true,
+  });
+  const onSubmit = submitWith({ email });
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-5" aria-describedby="sign-in-status">
       <TextField
