@@ -17,6 +17,7 @@ import { TARGET_FIELDS, type TargetKey } from "./target-fields";
 
 type TargetsResponse = {
   targets: Record<TargetKey, number> & { pyramidVoices: string[] };
+  custom: Record<string, unknown> | null;
   defaults: Record<TargetKey, number>;
   ranges: Record<TargetKey, [number, number]>;
   canEdit: boolean;
@@ -68,8 +69,9 @@ export function TargetsForm({ showId }: { showId: string }) {
 
   function submit(event: React.FormEvent) {
     event.preventDefault();
-    const out: Record<string, number | string[]> = { pyramidVoices: targets.data!.targets.pyramidVoices };
-    for (const f of TARGET_FIELDS) out[f.key] = Number(value(f.key));
+    // Only the fields the director changed are stored over what was kept; the rest stay at their (unrounded) values.
+    const out: Record<string, unknown> = { ...(targets.data!.custom ?? {}) };
+    for (const [key, text] of Object.entries(draft)) out[key] = Number(text);
     void save({ targets: out }, "Saved. Every set's checks now use these thresholds.");
   }
 
@@ -79,7 +81,7 @@ export function TargetsForm({ showId }: { showId: string }) {
       <ShowNav showId={showId} />
       <PageTitle sub="The thresholds the balance checks and the balance plan use for this show.">Balance targets</PageTitle>
       <Card title="Thresholds" titleId="targets-title">
-        <form onSubmit={submit} className="space-y-5" aria-describedby="targets-status">
+        <form onSubmit={submit} noValidate className="space-y-5" aria-describedby="targets-status">
           {TARGET_FIELDS.map((f) => (
             <TextField
               key={f.key}
