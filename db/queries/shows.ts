@@ -47,3 +47,16 @@ export async function listSets(showId: string) {
 export async function saveCheckTargets(showId: string, targets: Record<string, unknown> | null) {
   await db.update(shows).set({ checkTargets: targets }).where(eq(shows.id, showId));
 }
+
+/**
+ * A new, empty show: the default press box 18 m up and 25 m behind the front sideline on the 50,
+ * and set 1 (0 counts) to start the drill from, in one transaction.
+ */
+export async function createShow(programId: string, input: { name: string; fieldRules: "high-school" | "college" }) {
+  return db.transaction(async (tx) => {
+    const [show] = await tx.insert(shows).values({ programId, name: input.name, fieldRules: input.fieldRules }).returning({ id: shows.id, name: shows.name });
+    await tx.insert(listeningPoints).values({ showId: show!.id, name: "Press box", x: 0, y: -25, z: 18 });
+    const [first] = await tx.insert(sets).values({ showId: show!.id, number: "1", counts: 0, order: 0 }).returning({ id: sets.id });
+    return { ...show!, firstSetId: first!.id };
+  });
+}

@@ -84,6 +84,7 @@ const jsonRoutes = () => [
   ["POST", `/api/shows/${showId}/phrases/${phraseId}/plan`],
   ["POST", `/api/shows/${showId}/readings`],
   ["POST", `/api/programs/${programId}/invitations`],
+  ["POST", `/api/programs/${programId}/shows`],
   ["POST", `/api/programs/${programId}/catalog/adopt`],
   ["POST", `/api/programs/${programId}/catalog/restore`],
   ["POST", "/api/auth/sign-up"],

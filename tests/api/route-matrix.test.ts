@@ -37,6 +37,7 @@ const RULES: Record<string, Rule> = {
 
   "GET programs/[programId]": { roles: ALL },
   "GET programs/[programId]/shows": { roles: ALL },
+  "POST programs/[programId]/shows": { roles: EDITORS, body: "json" },
   "POST programs/[programId]/shows/import": { roles: EDITORS, body: "multipart" },
   "GET programs/[programId]/members": { roles: ALL },
   "PATCH programs/[programId]/members/[userId]": { roles: DIRECTORS, body: "json" },

@@ -5,6 +5,8 @@ import type { ProgramResponse, ShowsResponse } from "@/components/api-types";
 import { Breadcrumbs } from "@/components/Breadcrumbs";
 import { Card } from "@/components/Card";
 import { EmptyState } from "@/components/EmptyState";
+import { can } from "@/lib/auth/permissions";
+import { NewShowForm } from "./NewShowForm";
 import { ErrorState } from "@/components/ErrorState";
 import { PageTitle } from "@/components/PageTitle";
 import { RoleBadge, ROLE_WORDS } from "@/components/RoleBadge";
@@ -44,20 +46,22 @@ export function ProgramOverview({ programId }: { programId: string }) {
         </div>
       )}
       <div className="grid items-start gap-6 lg:grid-cols-[3fr_2fr]">
-        <ShowsCard shows={shows} />
+        <ShowsCard shows={shows} programId={programId} canCreate={!!program.data && can(program.data.role, "manage-show")} />
         <MembersCard program={program} />
       </div>
     </>
   );
 }
 
-function ShowsCard({ shows }: { shows: ApiState<ShowsResponse> }) {
+function ShowsCard({ shows, programId, canCreate }: { shows: ApiState<ShowsResponse>; programId: string; canCreate: boolean }) {
   if (shows.error) return <ErrorState error={shows.error} what="program" onRetry={() => shows.mutate()} />;
   if (!shows.data) return <SkeletonCard rows={2} label="Loading shows…" />;
   return (
     <Card title="Shows" titleId="shows-title">
       {shows.data.shows.length === 0 ? (
-        <EmptyState title="No shows yet">A show appears here once it is created for this program.</EmptyState>
+        <EmptyState title="No shows yet">
+          {canCreate ? "Start one below." : "A show appears here once a director or designer creates it."}
+        </EmptyState>
       ) : (
         <ul className="space-y-3">
           {shows.data.shows.map((s) => (
@@ -75,6 +79,7 @@ function ShowsCard({ shows }: { shows: ApiState<ShowsResponse> }) {
           ))}
         </ul>
       )}
+      {canCreate ? <NewShowForm programId={programId} onCreated={() => void shows.mutate()} /> : null}
     </Card>
   );
 }
