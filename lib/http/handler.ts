@@ -3,6 +3,7 @@ import { NextResponse } from "next/server";
 import { z } from "zod";
 import { fieldIssues } from "./body";
 import { HttpError, isDatabaseDown } from "./errors";
+import { API_CSP, setSecurityHeaders } from "./security-headers";
 
 type Ctx<P> = { params: Promise<P> };
 
@@ -23,11 +24,15 @@ export function errorResponse(err: unknown): NextResponse {
 /** Wraps a handler: `handler` receives the request and the route params already awaited. */
 export function route<P = Record<string, string>>(handler: (req: Request, params: P) => Promise<Response>) {
   return async (req: Request, ctx: Ctx<P>): Promise<Response> => {
+    let res: Response;
     try {
-      return await handler(req, await ctx.params);
+      res = await handler(req, await ctx.params);
     } catch (err) {
-      return errorResponse(err);
+      res = errorResponse(err);
     }
+    // Here rather than in next.config.ts headers(), whose rules are matched against every request's path.
+    setSecurityHeaders(res.headers, API_CSP);
+    return res;
   };
 }
 

@@ -2,18 +2,42 @@
 import { describe, expect, it } from "vitest";
 import { APP_URL } from "../support/api";
 
+function expectStaticHeaders(res: Response) {
+  expect(res.headers.get("x-content-type-options")).toBe("nosniff");
+  expect(res.headers.get("referrer-policy")).toBe("strict-origin-when-cross-origin");
+  expect(res.headers.get("x-frame-options")).toBe("DENY");
+}
+
 describe("security headers", () => {
-  for (const path of ["/sign-in", "/api/health"]) {
-    it(`are set on ${path}`, async () => {
-      const res = await fetch(APP_URL + path);
-      const csp = res.headers.get("content-security-policy") ?? "";
-      expect(csp).toContain("default-src 'self'");
-      expect(csp).toContain("frame-ancestors 'none'");
-      expect(csp).toMatch(/script-src 'self' 'nonce-[A-Za-z0-9+/=]+' 'strict-dynamic'/);
-      expect(res.headers.get("x-content-type-options")).toBe("nosniff");
-      expect(res.headers.get("referrer-policy")).toBe("strict-origin-when-cross-origin");
+  it("are set on a page, with a nonce for its scripts", async () => {
+    const res = await fetch(APP_URL + "/sign-in");
+    const csp = res.headers.get("content-security-policy") ?? "";
+    expect(csp).toContain("default-src 'self'");
+    expect(csp).toContain("frame-ancestors 'none'");
+    expect(csp).toMatch(/script-src 'self' 'nonce-[A-Za-z0-9+/=]+' 'strict-dynamic'/);
+    expectStaticHeaders(res);
+  });
+
+  // API answers are JSON or files: their policy allows nothing at all.
+  const apiCases: [string, RequestInit][] = [
+    ["a script's read (no Origin)", {}],
+    ["a browser's read (same Origin)", { headers: { origin: APP_URL } }],
+    ["an error answer", { method: "POST", headers: { "content-type": "application/json" }, body: "{" }],
+  ];
+  for (const [name, init] of apiCases) {
+    it(`are set on ${name}`, async () => {
+      const res = await fetch(APP_URL + (init.method === "POST" ? "/api/auth/sign-in" : "/api/health"), init);
+      expect(res.headers.get("content-security-policy")).toBe("default-src 'none'; frame-ancestors 'none'");
+      expectStaticHeaders(res);
     });
   }
+
+  it("are set on the refusal of a cross-site write", async () => {
+    const res = await fetch(APP_URL + "/api/auth/sign-out", { method: "POST", headers: { origin: "https://elsewhere.example" } });
+    expect(res.status).toBe(403);
+    expect(res.headers.get("content-security-policy")).toBe("default-src 'none'; frame-ancestors 'none'");
+    expectStaticHeaders(res);
+  });
 
   it("gives every page answer a fresh nonce", async () => {
     const one = (await fetch(APP_URL + "/sign-in")).headers.get("content-security-policy");
