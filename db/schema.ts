@@ -1,8 +1,10 @@
 // The whole data model. Row types are exported beside each table.
 import {
+  bigint,
   doublePrecision,
   index,
   integer,
+  json,
   jsonb,
   pgEnum,
   pgTable,
@@ -118,6 +120,8 @@ export const shows = pgTable(
     groundFactor: doublePrecision("ground_factor"),
     /** The director's thresholds for the balance checks; null keeps the defaults. */
     checkTargets: jsonb("check_targets"),
+    /** Moved by database triggers on every write to a show-wide input of the analyses (migration 0005). */
+    inputsRevision: bigint("inputs_revision", { mode: "number" }).notNull().default(0),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
@@ -189,6 +193,8 @@ export const sets = pgTable(
     order: integer("order").notNull(),
     /** Optimistic concurrency: every write of the set or its positions bumps it. */
     version: integer("version").notNull().default(1),
+    /** Moved by a database trigger on every write to the set's positions (migration 0005). */
+    inputsRevision: bigint("inputs_revision", { mode: "number" }).notNull().default(0),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
@@ -273,6 +279,7 @@ export const performerOverrides = pgTable(
 export type PerformerOverride = typeof performerOverrides.$inferSelect;
 
 // A computed result per set and listening point, reused while the hash of its inputs and the model version are unchanged.
+// json, not jsonb: the result is only ever stored and read back whole, and json gives it back as the text it was sent as.
 const storedResultColumns = () => ({
   setId: uuid("set_id")
     .notNull()
@@ -282,14 +289,19 @@ const storedResultColumns = () => ({
     .references(() => listeningPoints.id, { onDelete: "cascade" }),
   inputsHash: text("inputs_hash").notNull(),
   modelVersion: text("model_version").notNull(),
-  result: jsonb("result").notNull(),
+  result: json("result").notNull(),
   computedAt: timestamp("computed_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
 });
 
-// Stored box mixes, with their balance checks and plan.
+// Stored box mixes, with their balance checks and plan. The two revisions are the show's and the set's
+// when the result was last known to match its inputs: equal revisions mean a read needs no hash at all.
 export const analyses = pgTable(
   "analyses",
-  storedResultColumns(),
+  {
+    ...storedResultColumns(),
+    showRevision: bigint("show_revision", { mode: "number" }),
+    setRevision: bigint("set_revision", { mode: "number" }),
+  },
   (t) => [primaryKey({ columns: [t.setId, t.listeningPointId] })],
 );
 export type Analysis = typeof analyses.$inferSelect;
