@@ -3,9 +3,20 @@ import { db, type Tx } from "../client";
 import { performers, phrases, positions, sets } from "../schema";
 import { isUniqueViolation } from "./pg-errors";
 
+/** The columns of a set that requests work with (everything but its timestamps). */
+export const setColumns = {
+  id: sets.id,
+  showId: sets.showId,
+  number: sets.number,
+  counts: sets.counts,
+  order: sets.order,
+  version: sets.version,
+  inputsRevision: sets.inputsRevision,
+};
+
 export async function findSetInShow(showId: string, setId: string) {
   const rows = await db
-    .select({ id: sets.id, showId: sets.showId, number: sets.number, counts: sets.counts, order: sets.order, version: sets.version })
+    .select(setColumns)
     .from(sets)
     .where(and(eq(sets.id, setId), eq(sets.showId, showId)))
     .limit(1);

@@ -37,7 +37,7 @@ export async function listPerformers(showId: string) {
 
 export async function listSets(showId: string) {
   return db
-    .select({ id: sets.id, number: sets.number, counts: sets.counts, order: sets.order, version: sets.version })
+    .select({ id: sets.id, number: sets.number, counts: sets.counts, order: sets.order, version: sets.version, inputsRevision: sets.inputsRevision })
     .from(sets)
     .where(eq(sets.showId, showId))
     .orderBy(asc(sets.order));

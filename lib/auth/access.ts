@@ -1,8 +1,7 @@
 // "May this member do this to this program": every route handler, page and server action asks here.
 import "server-only";
 import { findMembership } from "@/db/queries/memberships";
-import { findSetInShow } from "@/db/queries/sets";
-import { findShow } from "@/db/queries/shows";
+import { findSetAccess, findShowAccess } from "@/db/queries/access";
 import { forbidden, notFound, unauthorized } from "@/lib/http/errors";
 import { can, type Action, type Role } from "./permissions";
 import { getCurrentSession } from "./session";
@@ -25,21 +24,26 @@ export async function requireProgram(programId: string, action: Action) {
   return { user, role, programId };
 }
 
+/** A show of another program is as unknown as a show that does not exist. */
+function showRole<T extends { role: Role | null }>(row: T | null, action: Action): T & { role: Role } {
+  if (!row?.role) throw notFound("No such show.");
+  if (!can(row.role, action)) throw forbidden();
+  return row as T & { role: Role };
+}
+
 export async function requireShow(showId: string, action: Action) {
   const user = await requireUser();
   if (!UUID.test(showId)) throw notFound("No such show.");
-  const show = await findShow(showId);
-  if (!show) throw notFound("No such show.");
-  const role = await findMembership(user.id, show.programId);
-  if (!role) throw notFound("No such show.");
-  if (!can(role, action)) throw forbidden();
+  const { show, role } = showRole(await findShowAccess(user.id, showId), action);
   return { user, role, show };
 }
 
 export async function requireSet(showId: string, setId: string, action: Action) {
-  const access = await requireShow(showId, action);
-  if (!UUID.test(setId)) throw notFound("No such set.");
-  const set = await findSetInShow(showId, setId);
+  const user = await requireUser();
+  if (!UUID.test(showId)) throw notFound("No such show.");
+  // An id that is not a UUID names no set; the show and role are still checked first, as for any set.
+  const row = await findSetAccess(user.id, showId, UUID.test(setId) ? setId : null);
+  const { show, role, set } = showRole(row, action);
   if (!set) throw notFound("No such set.");
-  return { ...access, set };
+  return { user, role, show, set };
 }
