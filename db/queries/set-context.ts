@@ -1,6 +1,3 @@
-import { and, eq } from "drizzle-orm";
-import { db } from "../client";
-import { analyses } from "../schema";
 import { currentCatalog } from "./catalog";
 import { loadMusic } from "./music";
 import { listPositions } from "./sets";
@@ -16,25 +13,4 @@ export async function loadSetContext(show: { id: string; programId: string }, se
     currentCatalog(show.programId),
   ]);
   return { roster, positions, music, listeningPoints, catalog };
-}
-
-export async function findStoredAnalysis(setId: string, listeningPointId: string) {
-  const rows = await db
-    .select()
-    .from(analyses)
-    .where(and(eq(analyses.setId, setId), eq(analyses.listeningPointId, listeningPointId)))
-    .limit(1);
-  return rows[0] ?? null;
-}
-
-export async function storeAnalysis(row: { setId: string; listeningPointId: string; inputsHash: string; modelVersion: string; result: unknown }) {
-  const computedAt = new Date();
-  await db
-    .insert(analyses)
-    .values({ ...row, computedAt })
-    .onConflictDoUpdate({
-      target: [analyses.setId, analyses.listeningPointId],
-      set: { inputsHash: row.inputsHash, modelVersion: row.modelVersion, result: row.result, computedAt },
-    });
-  return computedAt;
 }

@@ -1,8 +1,11 @@
 // A set's analysis at a listening point: box mix, balance checks and balance plan, stored together
-// and reused while the hash of everything they depend on is unchanged.
+// and reused while the hash of everything they depend on is unchanged. Hashing means reading every
+// input, so the row also keeps the show's and set's input revisions it matched: while those are the
+// current ones, nothing has changed and the stored result is served without reading any input.
 import "server-only";
 import { createHash } from "node:crypto";
-import { findStoredAnalysis, loadSetContext, storeAnalysis } from "@/db/queries/set-context";
+import { findCurrentAnalysisText, findStoredAnalysis, markAnalysisCurrent, storeAnalysis } from "@/db/queries/analyses";
+import { loadSetContext } from "@/db/queries/set-context";
 import type { Show } from "@/db/schema";
 import { analyzeSet, checkBalance, solveBalancePlan, toJsonSafe } from "@/lib/acoustics";
 import { BALANCE_VERSION } from "@/lib/acoustics/targets";
@@ -32,7 +35,22 @@ export function computeBalance(played: AnalysisInput, written: AnalysisInput, li
 
 export type StoredBalance = ReturnType<typeof computeBalance>;
 
-export async function storedAnalysis(show: Show, set: { id: string; order: number }, listeningPointId: string) {
+/** The stored result as JSON text while its revisions are current, else null: the analysis answer's fast path. */
+export async function currentStoredAnalysisText(setId: string, listeningPointId: string) {
+  return findCurrentAnalysisText(setId, listeningPointId, STORED_VERSION);
+}
+
+/**
+ * `show` and `set` must have been read before this call: their revisions are then no newer than the inputs
+ * read here, so a result is never remembered under revisions of inputs it has not seen.
+ */
+export async function storedAnalysis(show: Show, set: { id: string; order: number; inputsRevision: number }, listeningPointId: string) {
+  const revisions = { showRevision: show.inputsRevision, setRevision: set.inputsRevision };
+  const stored = await findStoredAnalysis(set.id, listeningPointId);
+  const sameVersion = stored?.modelVersion === STORED_VERSION;
+  if (stored && sameVersion && stored.showRevision === revisions.showRevision && stored.setRevision === revisions.setRevision) {
+    return { result: stored.result as StoredBalance, computedAt: stored.computedAt, reused: true };
+  }
   const ctx = await loadSetContext(show, set);
   if (!ctx.listeningPoints.some((l) => l.id === listeningPointId)) throw notFound("No such listening point in this show.");
   const targets = showTargets(show.checkTargets);
@@ -47,11 +65,11 @@ export async function storedAnalysis(show: Show, set: { id: string; order: numbe
     { order: set.order, positions: ctx.positions },
   );
   const hash = balanceHash(played, written, targets, listeningPointId);
-  const stored = await findStoredAnalysis(set.id, listeningPointId);
-  if (stored && stored.inputsHash === hash && stored.modelVersion === STORED_VERSION) {
+  if (stored && sameVersion && stored.inputsHash === hash) {
+    await markAnalysisCurrent({ setId: set.id, listeningPointId, inputsHash: hash, modelVersion: STORED_VERSION }, revisions);
     return { result: stored.result as StoredBalance, computedAt: stored.computedAt, reused: true };
   }
   const result = computeBalance(played, written, listeningPointId, targets);
-  const computedAt = await storeAnalysis({ setId: set.id, listeningPointId, inputsHash: hash, modelVersion: STORED_VERSION, result });
+  const computedAt = await storeAnalysis({ setId: set.id, listeningPointId, inputsHash: hash, modelVersion: STORED_VERSION, result, ...revisions });
   return { result, computedAt, reused: false };
 }

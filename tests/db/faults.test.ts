@@ -31,6 +31,28 @@ describe("two app processes on one database", () => {
     expect(me.body.memberships[0].programName).toBe("Fault Band");
   });
 
+  it("an analysis kept by one process is not served after a save on the other", async () => {
+    const programId = (await client.get("/api/me")).body.memberships[0].programId;
+    const made = (await client.post(`/api/programs/${programId}/shows`, { name: "Two Process Show" })).body.show;
+    const setPath = `/api/shows/${made.id}/sets/${made.firstSetId}`;
+    const pressBox = (await client.get(`/api/shows/${made.id}`)).body.listeningPoints[0].id;
+    const performerId = (await client.post(`/api/shows/${made.id}/performers`, { instrument: "trumpet" })).body.performers[0].id;
+    const save = (on: Client, version: number, y: number) => on.put(`${setPath}/positions`, { version, positions: [{ performerId, x: 0, y, facingDeg: 0 }] });
+    const placed = await save(client, (await client.get(setPath)).body.set.version, 5);
+    expect(placed.status).toBe(200);
+
+    const analysis = `${setPath}/analysis?listeningPointId=${pressBox}`;
+    await client.get(analysis);
+    const kept = await client.get(analysis);
+    expect(kept.body.reused).toBe(true);
+    const onB = new Client(b.url);
+    onB.cookie = client.cookie;
+    expect((await save(onB, placed.body.version, 40)).status).toBe(200);
+    const after = await client.get(analysis);
+    expect(after.body.reused).toBe(false);
+    expect(after.body.mix.performers[0].dbA).toBeLessThan(kept.body.mix.performers[0].dbA - 3);
+  });
+
   it("sign-in limits are shared: failures on one process lock the account on the other", async () => {
     const email = uniqueEmail("shared-limit");
     await new Client(a.url).post("/api/auth/sign-up", { name: "Limit", email, password: "right-password-1", programName: "Limit Band" });

@@ -1,0 +1,33 @@
+// The body of GET …/analysis. Reads far outnumber changes, and a 300-performer answer is about 64 KB,
+// so the encoded answer is also kept in memory beside the revisions it matched. PostgreSQL stays the
+// source of truth: a kept answer is served only while the revisions the access check just read are the
+// same, so every process answers alike and a restart loses nothing but the copy.
+import "server-only";
+import { LRUCache } from "lru-cache";
+import type { Show } from "@/db/schema";
+import { MODEL_VERSION } from "@/lib/acoustics/version";
+import { jsonWithStoredObject } from "@/lib/http/stored-json";
+import { currentStoredAnalysisText, storedAnalysis } from "./stored-analysis";
+
+type Kept = { showRevision: number; setRevision: number; body: Uint8Array<ArrayBuffer> };
+
+const kept = new LRUCache<string, Kept>({ maxSize: 32 * 1024 * 1024, sizeCalculation: (k) => k.body.byteLength });
+const encoder = new TextEncoder();
+
+/** `show` and `set` as the access check read them for this request: their revisions decide what is current. */
+export async function analysisAnswer(show: Show, set: { id: string; order: number; inputsRevision: number }, listeningPointId: string): Promise<Uint8Array<ArrayBuffer>> {
+  const key = `${set.id}/${listeningPointId}`;
+  const hit = kept.get(key);
+  if (hit && hit.showRevision === show.inputsRevision && hit.setRevision === set.inputsRevision) return hit.body;
+
+  const head = { listeningPointId, modelVersion: MODEL_VERSION };
+  const current = await currentStoredAnalysisText(set.id, listeningPointId);
+  if (current) {
+    const fields = { ...head, computedAt: current.computedAt.toISOString(), reused: true };
+    const body = encoder.encode(jsonWithStoredObject(fields, current.resultText));
+    kept.set(key, { showRevision: current.showRevision, setRevision: current.setRevision, body });
+    return body;
+  }
+  const { result, computedAt, reused } = await storedAnalysis(show, set, listeningPointId);
+  return encoder.encode(JSON.stringify({ ...head, computedAt: computedAt.toISOString(), reused, ...result }));
+}
