@@ -5,7 +5,7 @@
 import { OCTAVE_BANDS, BAND_COUNT } from "./bands";
 import { groupBy, soundingPlayers, type BoxPlayer } from "./box-players";
 import { PYRAMID_FAMILIES, REGISTERS_LOW_TO_HIGH } from "./checks";
-import { instrumentLevelDb } from "./instrument";
+import { instrumentBandsInto } from "./instrument";
 import type { BalanceTargets } from "./targets";
 import { DYNAMICS, VOICES, type AnalysisInput, type Dynamic, type InstrumentSpec, type PointResult, type Voice } from "./types";
 import { aWeightingDb } from "./weighting";
@@ -58,7 +58,11 @@ export interface PlanModel {
 function energiesByDynamic(p: BoxPlayer, ratioCache: Map<InstrumentSpec, Float64Array[][]>): Float64Array {
   let ratios = ratioCache.get(p.spec);
   if (!ratios) {
-    const lw = DYNAMICS.map((d) => Array.from({ length: BAND_COUNT }, (_, b) => instrumentLevelDb(p.spec, d, b)));
+    const lw = DYNAMICS.map((d) => {
+      const bands = new Float64Array(BAND_COUNT);
+      instrumentBandsInto(p.spec, d, bands);
+      return bands;
+    });
     // ratios[own][d][b] = 10^((Lw(d, b) − Lw(own, b)) / 10) · A-weighting energy of band b
     ratios = lw.map((own) => lw.map((at) => Float64Array.from(at, (v, b) => 10 ** ((v - own[b]!) / 10) * A_WEIGHT_ENERGY[b]!)));
     ratioCache.set(p.spec, ratios);
