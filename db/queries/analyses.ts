@@ -6,11 +6,28 @@ import { analyses, sets, shows } from "../schema";
 /** The show's and the set's input revisions (see migration 0005), as read with the show and set rows. */
 export type InputRevisions = { showRevision: number; setRevision: number };
 
-export async function findStoredAnalysis(setId: string, listeningPointId: string) {
+/** What decides whether the stored result still holds, without the result itself (tens of KB to parse). */
+export async function findStoredAnalysisKey(setId: string, listeningPointId: string) {
   const rows = await db
-    .select()
+    .select({
+      inputsHash: analyses.inputsHash,
+      modelVersion: analyses.modelVersion,
+      showRevision: analyses.showRevision,
+      setRevision: analyses.setRevision,
+      computedAt: analyses.computedAt,
+    })
     .from(analyses)
     .where(and(eq(analyses.setId, setId), eq(analyses.listeningPointId, listeningPointId)))
+    .limit(1);
+  return rows[0] ?? null;
+}
+
+/** The stored result, while it still has this hash (null if another reader replaced it meanwhile). */
+export async function findStoredResult(setId: string, listeningPointId: string, inputsHash: string) {
+  const rows = await db
+    .select({ result: analyses.result, computedAt: analyses.computedAt })
+    .from(analyses)
+    .where(and(eq(analyses.setId, setId), eq(analyses.listeningPointId, listeningPointId), eq(analyses.inputsHash, inputsHash)))
     .limit(1);
   return rows[0] ?? null;
 }

@@ -4,8 +4,10 @@ import { performerOverrides, phrases, sets, voiceAssignments } from "../schema";
 
 /** The show's phrases with the order of their first and last sets, and every assignment and override. */
 export async function loadMusic(showId: string) {
-  const phraseRows = await db.select().from(phrases).where(eq(phrases.showId, showId)).orderBy(asc(phrases.order));
-  const setRows = await db.select({ id: sets.id, order: sets.order }).from(sets).where(eq(sets.showId, showId));
+  const [phraseRows, setRows] = await Promise.all([
+    db.select().from(phrases).where(eq(phrases.showId, showId)).orderBy(asc(phrases.order)),
+    db.select({ id: sets.id, order: sets.order }).from(sets).where(eq(sets.showId, showId)),
+  ]);
   const orderOf = new Map(setRows.map((s) => [s.id, s.order]));
   const ids = phraseRows.map((p) => p.id);
   const [assignments, overrides] = ids.length

@@ -4,7 +4,7 @@
 // current ones, nothing has changed and the stored result is served without reading any input.
 import "server-only";
 import { createHash } from "node:crypto";
-import { findCurrentAnalysisText, findStoredAnalysis, markAnalysisCurrent, storeAnalysis } from "@/db/queries/analyses";
+import { findCurrentAnalysisText, findStoredAnalysisKey, findStoredResult, markAnalysisCurrent, storeAnalysis } from "@/db/queries/analyses";
 import { loadSetContext } from "@/db/queries/set-context";
 import type { Show } from "@/db/schema";
 import { analyzeSet, checkBalance, solveBalancePlan, toJsonSafe } from "@/lib/acoustics";
@@ -46,10 +46,15 @@ export async function currentStoredAnalysisText(setId: string, listeningPointId:
  */
 export async function storedAnalysis(show: Show, set: { id: string; order: number; inputsRevision: number }, listeningPointId: string) {
   const revisions = { showRevision: show.inputsRevision, setRevision: set.inputsRevision };
-  const stored = await findStoredAnalysis(set.id, listeningPointId);
+  const reuse = async (hash: string) => {
+    const row = await findStoredResult(set.id, listeningPointId, hash);
+    return row && { result: row.result as StoredBalance, computedAt: row.computedAt, reused: true };
+  };
+  const stored = await findStoredAnalysisKey(set.id, listeningPointId);
   const sameVersion = stored?.modelVersion === STORED_VERSION;
   if (stored && sameVersion && stored.showRevision === revisions.showRevision && stored.setRevision === revisions.setRevision) {
-    return { result: stored.result as StoredBalance, computedAt: stored.computedAt, reused: true };
+    const kept = await reuse(stored.inputsHash);
+    if (kept) return kept;
   }
   const ctx = await loadSetContext(show, set);
   if (!ctx.listeningPoints.some((l) => l.id === listeningPointId)) throw notFound("No such listening point in this show.");
@@ -66,8 +71,11 @@ export async function storedAnalysis(show: Show, set: { id: string; order: numbe
   );
   const hash = balanceHash(played, written, targets, listeningPointId);
   if (stored && sameVersion && stored.inputsHash === hash) {
-    await markAnalysisCurrent({ setId: set.id, listeningPointId, inputsHash: hash, modelVersion: STORED_VERSION }, revisions);
-    return { result: stored.result as StoredBalance, computedAt: stored.computedAt, reused: true };
+    const kept = await reuse(hash);
+    if (kept) {
+      await markAnalysisCurrent({ setId: set.id, listeningPointId, inputsHash: hash, modelVersion: STORED_VERSION }, revisions);
+      return kept;
+    }
   }
   const result = computeBalance(played, written, listeningPointId, targets);
   const computedAt = await storeAnalysis({ setId: set.id, listeningPointId, inputsHash: hash, modelVersion: STORED_VERSION, result, ...revisions });
