@@ -27,4 +27,18 @@ describe("migrations", () => {
     expect(roles.map((r) => r.enumlabel)).toEqual(["director", "designer", "staff"]);
     await sql.end();
   });
+
+  it("store results as json, compressed with lz4 where the server has it", async () => {
+    const sql = postgres(db.url, { max: 1, onnotice: () => {} });
+    const [{ lz4 }] = await sql`select 'lz4' = any (enumvals) as lz4 from pg_settings where name = 'default_toast_compression'`;
+    const columns = await sql`
+      select c.relname, format_type(a.atttypid, a.atttypmod) as type, a.attcompression as compression
+      from pg_attribute a join pg_class c on c.oid = a.attrelid
+      where c.relname in ('analyses', 'balance_sweeps') and a.attname = 'result' order by c.relname`;
+    expect(columns.map((c) => [c.relname, c.type, c.compression])).toEqual([
+      ["analyses", "json", lz4 ? "l" : ""],
+      ["balance_sweeps", "json", lz4 ? "l" : ""],
+    ]);
+    await sql.end();
+  });
 });
