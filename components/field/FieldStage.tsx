@@ -6,7 +6,7 @@
 import type Konva from "konva";
 import type { KonvaEventObject } from "konva/lib/Node";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
-import { Circle, Group, Layer, Line, Rect, Shape, Stage, Text } from "react-konva";
+import { Circle, Group, Layer, Line, Rect, Shape, Stage } from "react-konva";
 import type { FieldRules } from "@/lib/field/geometry";
 import { clampToFieldArea } from "@/lib/field/geometry";
 import { facingVector, fieldBounds, fitView, panBy, toField, toScreen, zoomAt, type View } from "@/lib/field/view";
@@ -64,7 +64,7 @@ export default function FieldStage(props: FieldStageProps) {
   const [view, setView] = useState<View | null>(null);
   const [band, setBand] = useState<{ x: number; y: number; w: number; h: number } | null>(null);
   const dotsLayer = useRef<Konva.Layer>(null);
-  const nodes = useRef(new Map<string, Konva.Group>());
+  const nodes = useRef(new Map<string, Konva.Shape>());
   const gesture = useRef<Gesture | null>(null);
   const frame = useRef<number | null>(null);
   const latest = useRef(props);
@@ -117,12 +117,7 @@ export default function FieldStage(props: FieldStageProps) {
       if (node) node.position(toScreen(v, at.x, at.y));
     }
     const rel = p.onDragFrame(moved);
-    if (rel) {
-      for (const id of g.ids) {
-        const halo = nodes.current.get(id)?.findOne<Konva.Circle>(".halo");
-        if (halo) halo.radius(haloRadius(r, rel[id]));
-      }
-    }
+    if (rel) for (const id of g.ids) nodes.current.get(id)?.setAttr("halo", haloRadius(r, rel[id]));
     dotsLayer.current?.drawScene(); // the hit graph is redrawn once, when the drag ends
     p.onFrameTime?.(performance.now() - t0);
   }, [v, byId, r]);
@@ -270,44 +265,27 @@ export default function FieldStage(props: FieldStageProps) {
             const flag = props.flagged?.has(d.id) ?? false;
             const halo = haloRadius(r, props.relDb[d.id]);
             return (
-              <Group
+              // One shape a performer (halo, symbol, facing, label): a drag frame redraws 300 nodes, not 1200.
+              <Shape
                 key={d.id}
                 id={d.id}
                 name="dot"
                 x={at.x}
                 y={at.y}
-                ref={(node) => {
+                halo={halo}
+                ref={(node: Konva.Shape | null) => {
                   if (node) nodes.current.set(d.id, node);
                   else nodes.current.delete(d.id);
                 }}
-              >
-                <Circle name="halo" radius={halo} fill={d.style.colour} opacity={0.18} listening={false} perfectDrawEnabled={false} />
-                <Shape
-                  sceneFunc={(ctx) => drawSymbol(ctx, d, r, sel, flag)}
-                  hitFunc={(ctx, shape) => {
-                    ctx.beginPath();
-                    ctx.arc(0, 0, r + 3, 0, Math.PI * 2);
-                    ctx.closePath();
-                    ctx.fillShape(shape);
-                  }}
-                  fill="#000"
-                />
-                <Line points={[f.dx * r, f.dy * r, f.dx * (r + 6), f.dy * (r + 6)]} stroke="#1c2430" strokeWidth={2} lineCap="round" listening={false} perfectDrawEnabled={false} />
-                <Text
-                  visible={labelled.has(d.id)}
-                  x={r * 0.8}
-                  y={-r - 9}
-                  text={d.label}
-                  fontSize={11}
-                  fontStyle="bold"
-                  fill="#1c2430"
-                  stroke="#ffffff"
-                  strokeWidth={3}
-                  fillAfterStrokeEnabled
-                  listening={false}
-                  perfectDrawEnabled={false}
-                />
-              </Group>
+                sceneFunc={(ctx, shape) => drawDot(ctx, d, r, { selected: sel, flagged: flag, halo: shape.getAttr("halo") as number, facing: f, label: labelled.has(d.id) })}
+                hitFunc={(ctx, shape) => {
+                  ctx.beginPath();
+                  ctx.arc(0, 0, r + 3, 0, Math.PI * 2);
+                  ctx.closePath();
+                  ctx.fillShape(shape);
+                }}
+                fill="#000"
+              />
             );
           })}
         </Layer>
@@ -359,6 +337,41 @@ function visibleLabels(dots: StageDot[], v: View, selected: ReadonlySet<string>)
 }
 
 type Ctx = Parameters<NonNullable<Konva.ShapeConfig["sceneFunc"]>>[0];
+
+/** A performer on the field: contribution halo, symbol, facing tick and (when it fits) its label. */
+function drawDot(ctx: Ctx, d: StageDot, r: number, o: { selected: boolean; flagged: boolean; halo: number; facing: { dx: number; dy: number }; label: boolean }) {
+  const c = ctx._context;
+  if (o.halo > 0) {
+    c.beginPath();
+    c.arc(0, 0, o.halo, 0, Math.PI * 2);
+    c.globalAlpha = 0.18;
+    c.fillStyle = d.style.colour;
+    c.fill();
+    c.globalAlpha = 1;
+  }
+  drawSymbol(ctx, d, r, o.selected, o.flagged);
+  c.beginPath();
+  c.moveTo(o.facing.dx * r, o.facing.dy * r);
+  c.lineTo(o.facing.dx * (r + 6), o.facing.dy * (r + 6));
+  c.lineWidth = 2;
+  c.lineCap = "round";
+  c.strokeStyle = "#1c2430";
+  c.stroke();
+  c.lineCap = "butt";
+  if (o.label) {
+    // Bold 11 px with a white edge, so a label stays readable over grass, lines and other symbols.
+    c.font = "bold 11px Arial";
+    c.textBaseline = "middle";
+    c.textAlign = "left";
+    c.lineJoin = "round";
+    c.lineWidth = 3;
+    c.strokeStyle = "#ffffff";
+    c.strokeText(d.label, r * 0.8, -r - 3.5);
+    c.fillStyle = "#1c2430";
+    c.fillText(d.label, r * 0.8, -r - 3.5);
+    c.lineJoin = "miter";
+  }
+}
 
 /** The performer's symbol: family shape, voice colour and outline, selection ring, check marker. */
 function drawSymbol(ctx: Ctx, d: StageDot, r: number, selected: boolean, flagged: boolean) {
