@@ -228,7 +228,7 @@ export default function FieldStage(props: FieldStageProps) {
   const zoomButton = (factor: number) => setView((cur) => zoomAt(cur ?? v, factor, size.width / 2, size.height / 2));
 
   return (
-    <div ref={box} className="relative h-full w-full touch-none select-none overflow-hidden rounded-lg border border-ink/15 bg-[#f3f4ef]" style={{ cursor: props.placing ? "crosshair" : undefined }} data-testid="field-stage">
+    <div ref={box} className="relative h-full w-full touch-none select-none overflow-hidden rounded-lg border border-ink/15 bg-[#f3f4ef]" style={{ cursor: props.placing ? "crosshair" : undefined }} data-testid="field-stage" data-scale={v.scale.toFixed(4)}>
       <Stage
         width={size.width}
         height={size.height}
