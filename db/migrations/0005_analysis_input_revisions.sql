@@ -18,15 +18,12 @@ CREATE TRIGGER shows_inputs_revision BEFORE UPDATE ON shows
   FOR EACH ROW EXECUTE FUNCTION farfield_show_row_revision();
 --> statement-breakpoint
 
+-- Row triggers below name OLD and NEW together: the one an operation lacks is NULL and matches nothing.
+
 -- Rows that carry their show's id.
 CREATE FUNCTION farfield_bump_show_of_row() RETURNS trigger LANGUAGE plpgsql AS $$
 BEGIN
-  IF TG_OP <> 'INSERT' THEN
-    UPDATE shows SET inputs_revision = inputs_revision + 1 WHERE id = OLD.show_id;
-  END IF;
-  IF TG_OP <> 'DELETE' THEN
-    UPDATE shows SET inputs_revision = inputs_revision + 1 WHERE id = NEW.show_id;
-  END IF;
+  UPDATE shows SET inputs_revision = inputs_revision + 1 WHERE id IN (OLD.show_id, NEW.show_id);
   RETURN NULL;
 END $$;
 --> statement-breakpoint
@@ -47,12 +44,8 @@ CREATE TRIGGER sets_inputs_revision AFTER INSERT OR DELETE OR UPDATE OF "order",
 -- Rows that belong to a phrase: voice assignments and performer overrides.
 CREATE FUNCTION farfield_bump_show_of_phrase_row() RETURNS trigger LANGUAGE plpgsql AS $$
 BEGIN
-  IF TG_OP <> 'INSERT' THEN
-    UPDATE shows SET inputs_revision = inputs_revision + 1 WHERE id = (SELECT show_id FROM phrases WHERE id = OLD.phrase_id);
-  END IF;
-  IF TG_OP <> 'DELETE' THEN
-    UPDATE shows SET inputs_revision = inputs_revision + 1 WHERE id = (SELECT show_id FROM phrases WHERE id = NEW.phrase_id);
-  END IF;
+  UPDATE shows SET inputs_revision = inputs_revision + 1
+    WHERE id IN (SELECT show_id FROM phrases WHERE id IN (OLD.phrase_id, NEW.phrase_id));
   RETURN NULL;
 END $$;
 --> statement-breakpoint
@@ -66,12 +59,7 @@ CREATE TRIGGER performer_overrides_inputs_revision AFTER INSERT OR UPDATE OR DEL
 -- The catalog in force is the program's: every show of the program.
 CREATE FUNCTION farfield_bump_shows_of_program() RETURNS trigger LANGUAGE plpgsql AS $$
 BEGIN
-  IF TG_OP <> 'INSERT' THEN
-    UPDATE shows SET inputs_revision = inputs_revision + 1 WHERE program_id = OLD.program_id;
-  END IF;
-  IF TG_OP <> 'DELETE' THEN
-    UPDATE shows SET inputs_revision = inputs_revision + 1 WHERE program_id = NEW.program_id;
-  END IF;
+  UPDATE shows SET inputs_revision = inputs_revision + 1 WHERE program_id IN (OLD.program_id, NEW.program_id);
   RETURN NULL;
 END $$;
 --> statement-breakpoint
