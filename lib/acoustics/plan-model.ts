@@ -284,10 +284,11 @@ export function energiesAtSteps(m: PlanModel, k: readonly number[]): Float64Arra
 
 /** Player energies for a uniform dB shift x per unit (the continuous relaxation). */
 export function energiesAtShifts(m: PlanModel, x: readonly number[]): Float64Array {
+  const factor = x.map((v) => 10 ** (v / 10)); // once a unit, not once a player
   const out = new Float64Array(m.playerUnit.length);
   for (let p = 0; p < out.length; p++) {
     const u = m.playerUnit[p]!;
-    out[p] = m.playerEnergy[p]![m.playerBase[p]!]! * (u >= 0 ? 10 ** (x[u]! / 10) : 1);
+    out[p] = m.playerEnergy[p]![m.playerBase[p]!]! * (u >= 0 ? factor[u]! : 1);
   }
   return out;
 }
