@@ -1,5 +1,7 @@
 // Load on the built app (scripts/bench.sh serves it): 50 clients reading a 300-performer set's analysis for 10 s,
 // then 10 clients saving positions (each on its own set, following its version). Last line: JSON figures.
+// For scale, the same 50 clients first read GET /api/health (no session, one `select 1`): the floor of any
+// route on this machine, measured in the same run since a shared machine's speed varies from run to run.
 import autocannon from "autocannon";
 import { sql } from "@/db/client";
 import { createLargeShow } from "./support/large-show";
@@ -39,6 +41,8 @@ async function main() {
   await fetch(APP_URL + analysisPath, { headers: { cookie } }); // store it once
   // A running server is warm: let the JIT settle before measuring, as the engine bench does.
   await run({ url: APP_URL + analysisPath, connections: 50, duration: 3, headers: { cookie } });
+  const floor = await run({ url: APP_URL + "/api/health", connections: 50, duration: 5 });
+  summary("floor: GET /api/health (50 clients, 5 s)", floor);
 
   const read = await run({ url: APP_URL + analysisPath, connections: 50, duration: 10, headers: { cookie } });
   summary("read analysis (50 clients, 10 s)", read);
@@ -72,6 +76,8 @@ async function main() {
   if (conflicts) console.log(`conflicts: ${conflicts}`);
 
   const figures = {
+    loadFloorRps: Math.round(floor.requests.average),
+    loadFloorP95Ms: floor.p95,
     loadReadRps: Math.round(read.requests.average),
     loadReadP50Ms: read.p50,
     loadReadP95Ms: read.p95,

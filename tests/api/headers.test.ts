@@ -32,6 +32,17 @@ describe("security headers", () => {
     });
   }
 
+  it("are set on the JSON 404 of a path no API route handles, for any method", async () => {
+    for (const method of ["GET", "POST", "PUT", "PATCH", "DELETE"]) {
+      const res = await fetch(APP_URL + "/api/no-such-thing/here", { method });
+      expect(res.status, method).toBe(404);
+      expect(res.headers.get("content-type"), method).toContain("application/json");
+      expect((await res.json()).error, method).toMatch(/no such API route/);
+      expect(res.headers.get("content-security-policy"), method).toBe("default-src 'none'; frame-ancestors 'none'");
+      expectStaticHeaders(res);
+    }
+  });
+
   it("are set on the refusal of a cross-site write", async () => {
     const res = await fetch(APP_URL + "/api/auth/sign-out", { method: "POST", headers: { origin: "https://elsewhere.example" } });
     expect(res.status).toBe(403);

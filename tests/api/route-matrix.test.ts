@@ -30,6 +30,12 @@ const RULES: Record<string, Rule> = {
   "GET auth/password-reset/confirm": { roles: "public" },
   "POST auth/password-reset/confirm": { roles: "public", body: "json" },
   "GET health": { roles: "public" },
+  // Paths no route handles: a JSON 404 for everyone (tests/api/headers.test.ts).
+  "GET [...path]": { roles: "public" },
+  "POST [...path]": { roles: "public", body: "none" },
+  "PUT [...path]": { roles: "public", body: "none" },
+  "PATCH [...path]": { roles: "public", body: "none" },
+  "DELETE [...path]": { roles: "public", body: "none" },
   "GET invitations/[token]": { roles: "public" },
   "POST invitations/[token]/accept": { roles: "public", body: "json" },
   "GET dev/mail": { roles: "signed-in" },
