@@ -41,6 +41,7 @@ async function main() {
   await fetch(APP_URL + analysisPath, { headers: { cookie } }); // store it once
   // A running server is warm: let the JIT settle before measuring, as the engine bench does.
   await run({ url: APP_URL + analysisPath, connections: 50, duration: 3, headers: { cookie } });
+  await run({ url: APP_URL + "/api/health", connections: 50, duration: 2 });
   const floor = await run({ url: APP_URL + "/api/health", connections: 50, duration: 5 });
   summary("floor: GET /api/health (50 clients, 5 s)", floor);
 
