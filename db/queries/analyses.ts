@@ -6,22 +6,6 @@ import { analyses, sets, shows } from "../schema";
 /** The show's and the set's input revisions (see migration 0005), as read with the show and set rows. */
 export type InputRevisions = { showRevision: number; setRevision: number };
 
-/** What decides whether the stored result still holds, without the result itself (tens of KB to parse). */
-export async function findStoredAnalysisKey(setId: string, listeningPointId: string) {
-  const rows = await db
-    .select({
-      inputsHash: analyses.inputsHash,
-      modelVersion: analyses.modelVersion,
-      showRevision: analyses.showRevision,
-      setRevision: analyses.setRevision,
-      computedAt: analyses.computedAt,
-    })
-    .from(analyses)
-    .where(and(eq(analyses.setId, setId), eq(analyses.listeningPointId, listeningPointId)))
-    .limit(1);
-  return rows[0] ?? null;
-}
-
 /** The stored result, while it still has this hash (null if another reader replaced it meanwhile). */
 export async function findStoredResult(setId: string, listeningPointId: string, inputsHash: string) {
   const rows = await db
@@ -32,37 +16,38 @@ export async function findStoredResult(setId: string, listeningPointId: string, 
   return rows[0] ?? null;
 }
 
-const currentAnalysisText = db
+// Current: stored under this model version, and the show's and set's revisions are still the ones it
+// matched, compared with the current rows in the same statement.
+const isCurrent = sql<boolean>`(${analyses.modelVersion} = ${sql.placeholder("modelVersion")} and ${analyses.showRevision} = ${shows.inputsRevision} and ${analyses.setRevision} = ${sets.inputsRevision})`;
+
+const storedRow = db
   .select({
+    inputsHash: analyses.inputsHash,
+    modelVersion: analyses.modelVersion,
     computedAt: analyses.computedAt,
     showRevision: shows.inputsRevision,
     setRevision: sets.inputsRevision,
-    resultText: sql<string>`${analyses.result}::text`,
+    // Read (and decompressed) only when it can be served.
+    currentText: sql<string | null>`case when ${isCurrent} then ${analyses.result}::text end`,
   })
   .from(analyses)
   .innerJoin(sets, eq(sets.id, analyses.setId))
   .innerJoin(shows, eq(shows.id, sets.showId))
-  .where(
-    and(
-      eq(analyses.setId, sql.placeholder("setId")),
-      eq(analyses.listeningPointId, sql.placeholder("listeningPointId")),
-      eq(analyses.modelVersion, sql.placeholder("modelVersion")),
-      eq(analyses.showRevision, shows.inputsRevision),
-      eq(analyses.setRevision, sets.inputsRevision),
-    ),
-  )
+  .where(and(eq(analyses.setId, sql.placeholder("setId")), eq(analyses.listeningPointId, sql.placeholder("listeningPointId"))))
   .limit(1)
-  .prepare("farfield_current_analysis_text");
+  .prepare("farfield_stored_analysis");
 
 /**
- * The stored result as JSON text, only if it was stored under this model version and the show's and set's
- * revisions are still the ones it matched: compared with the current rows in the same statement, and
- * never parsed here, since the answer sends it on as it is. Prepared once: it serves every analysis read.
+ * The stored row of a set at a listening point: its hash and version, and its result as JSON text when it
+ * is current (then `showRevision` and `setRevision` are the revisions it matched). Never parsed here: the
+ * analysis answer sends the text on as it is. Prepared once: it serves every analysis read.
  */
-export async function findCurrentAnalysisText(setId: string, listeningPointId: string, modelVersion: string) {
-  const rows = await currentAnalysisText.execute({ setId, listeningPointId, modelVersion });
+export async function findStoredAnalysis(setId: string, listeningPointId: string, modelVersion: string) {
+  const rows = await storedRow.execute({ setId, listeningPointId, modelVersion });
   return rows[0] ?? null;
 }
+
+export type StoredAnalysisRow = NonNullable<Awaited<ReturnType<typeof findStoredAnalysis>>>;
 
 export async function storeAnalysis(
   row: { setId: string; listeningPointId: string; inputsHash: string; modelVersion: string; result: unknown } & InputRevisions,

@@ -7,7 +7,7 @@ import { LRUCache } from "lru-cache";
 import type { Show } from "@/db/schema";
 import { MODEL_VERSION } from "@/lib/acoustics/version";
 import { jsonWithStoredObject } from "@/lib/http/stored-json";
-import { currentStoredAnalysisText, storedAnalysis } from "./stored-analysis";
+import { storedAnalysis, storedAnalysisRow } from "./stored-analysis";
 
 type Kept = { showRevision: number; setRevision: number; body: Uint8Array<ArrayBuffer> };
 
@@ -21,13 +21,13 @@ export async function analysisAnswer(show: Show, set: { id: string; order: numbe
   if (hit && hit.showRevision === show.inputsRevision && hit.setRevision === set.inputsRevision) return hit.body;
 
   const head = { listeningPointId, modelVersion: MODEL_VERSION };
-  const current = await currentStoredAnalysisText(set.id, listeningPointId);
-  if (current) {
-    const fields = { ...head, computedAt: current.computedAt.toISOString(), reused: true };
-    const body = encoder.encode(jsonWithStoredObject(fields, current.resultText));
-    kept.set(key, { showRevision: current.showRevision, setRevision: current.setRevision, body });
+  const row = await storedAnalysisRow(set.id, listeningPointId);
+  if (row?.currentText) {
+    const fields = { ...head, computedAt: row.computedAt.toISOString(), reused: true };
+    const body = encoder.encode(jsonWithStoredObject(fields, row.currentText));
+    kept.set(key, { showRevision: row.showRevision, setRevision: row.setRevision, body });
     return body;
   }
-  const { result, computedAt, reused } = await storedAnalysis(show, set, listeningPointId);
+  const { result, computedAt, reused } = await storedAnalysis(show, set, listeningPointId, row);
   return encoder.encode(JSON.stringify({ ...head, computedAt: computedAt.toISOString(), reused, ...result }));
 }

@@ -4,7 +4,7 @@
 // current ones, nothing has changed and the stored result is served without reading any input.
 import "server-only";
 import { createHash } from "node:crypto";
-import { findCurrentAnalysisText, findStoredAnalysisKey, findStoredResult, markAnalysisCurrent, storeAnalysis } from "@/db/queries/analyses";
+import { findStoredAnalysis, findStoredResult, markAnalysisCurrent, storeAnalysis, type StoredAnalysisRow } from "@/db/queries/analyses";
 import { loadSetContext } from "@/db/queries/set-context";
 import type { Show } from "@/db/schema";
 import { analyzeSet, checkBalance, solveBalancePlan, toJsonSafe } from "@/lib/acoustics";
@@ -35,27 +35,25 @@ export function computeBalance(played: AnalysisInput, written: AnalysisInput, li
 
 export type StoredBalance = ReturnType<typeof computeBalance>;
 
-/** The stored result as JSON text while its revisions are current, else null: the analysis answer's fast path. */
-export async function currentStoredAnalysisText(setId: string, listeningPointId: string) {
-  return findCurrentAnalysisText(setId, listeningPointId, STORED_VERSION);
+/** The stored row of a set at a point, with its result as text when it is current (see db/queries/analyses.ts). */
+export async function storedAnalysisRow(setId: string, listeningPointId: string) {
+  return findStoredAnalysis(setId, listeningPointId, STORED_VERSION);
 }
 
 /**
  * `show` and `set` must have been read before this call: their revisions are then no newer than the inputs
- * read here, so a result is never remembered under revisions of inputs it has not seen.
+ * read here, so a result is never remembered under revisions of inputs it has not seen. `row` is the stored
+ * row when the caller has just read it.
  */
-export async function storedAnalysis(show: Show, set: { id: string; order: number; inputsRevision: number }, listeningPointId: string) {
+export async function storedAnalysis(
+  show: Show,
+  set: { id: string; order: number; inputsRevision: number },
+  listeningPointId: string,
+  row?: StoredAnalysisRow | null,
+) {
   const revisions = { showRevision: show.inputsRevision, setRevision: set.inputsRevision };
-  const reuse = async (hash: string) => {
-    const row = await findStoredResult(set.id, listeningPointId, hash);
-    return row && { result: row.result as StoredBalance, computedAt: row.computedAt, reused: true };
-  };
-  const stored = await findStoredAnalysisKey(set.id, listeningPointId);
-  const sameVersion = stored?.modelVersion === STORED_VERSION;
-  if (stored && sameVersion && stored.showRevision === revisions.showRevision && stored.setRevision === revisions.setRevision) {
-    const kept = await reuse(stored.inputsHash);
-    if (kept) return kept;
-  }
+  const stored = row === undefined ? await storedAnalysisRow(set.id, listeningPointId) : row;
+  if (stored?.currentText) return { result: JSON.parse(stored.currentText) as StoredBalance, computedAt: stored.computedAt, reused: true };
   const ctx = await loadSetContext(show, set);
   if (!ctx.listeningPoints.some((l) => l.id === listeningPointId)) throw notFound("No such listening point in this show.");
   const targets = showTargets(show.checkTargets);
@@ -70,11 +68,11 @@ export async function storedAnalysis(show: Show, set: { id: string; order: numbe
     { order: set.order, positions: ctx.positions },
   );
   const hash = balanceHash(played, written, targets, listeningPointId);
-  if (stored && sameVersion && stored.inputsHash === hash) {
-    const kept = await reuse(hash);
+  if (stored?.modelVersion === STORED_VERSION && stored.inputsHash === hash) {
+    const kept = await findStoredResult(set.id, listeningPointId, hash);
     if (kept) {
       await markAnalysisCurrent({ setId: set.id, listeningPointId, inputsHash: hash, modelVersion: STORED_VERSION }, revisions);
-      return kept;
+      return { result: kept.result as StoredBalance, computedAt: kept.computedAt, reused: true };
     }
   }
   const result = computeBalance(played, written, listeningPointId, targets);
