@@ -7,31 +7,20 @@ import { memberships, sets, shows } from "../schema";
 import { setColumns } from "./sets";
 
 const showAccess = db
-  .select({ show: shows, role: memberships.role })
-  .from(shows)
-  .leftJoin(memberships, and(eq(memberships.programId, shows.programId), eq(memberships.userId, sql.placeholder("userId"))))
-  .where(eq(shows.id, sql.placeholder("showId")))
-  .limit(1)
-  .prepare("farfield_show_access");
-
-const setAccess = db
   .select({ show: shows, role: memberships.role, set: setColumns })
   .from(shows)
   .leftJoin(memberships, and(eq(memberships.programId, shows.programId), eq(memberships.userId, sql.placeholder("userId"))))
   .leftJoin(sets, and(eq(sets.id, sql.placeholder("setId")), eq(sets.showId, shows.id)))
   .where(eq(shows.id, sql.placeholder("showId")))
   .limit(1)
-  .prepare("farfield_set_access");
+  .prepare("farfield_show_access");
 
-/** The show with the user's role in its program (null when not a member), or null when there is no such show. */
-export async function findShowAccess(userId: string, showId: string) {
-  const rows = await showAccess.execute({ userId, showId });
-  return rows[0] ?? null;
-}
-
-/** As findShowAccess, with the set when `setId` names a set of the show (else null). */
-export async function findSetAccess(userId: string, showId: string, setId: string | null) {
-  const rows = await setAccess.execute({ userId, showId, setId });
+/**
+ * The show with the user's role in its program (null when not a member) and the set when `setId` names a
+ * set of the show (else null); null when there is no such show.
+ */
+export async function findShowAccess(userId: string, showId: string, setId: string | null = null) {
+  const rows = await showAccess.execute({ userId, showId, setId });
   return rows[0] ?? null;
 }
 

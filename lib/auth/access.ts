@@ -1,7 +1,7 @@
 // "May this member do this to this program": every route handler, page and server action asks here.
 import "server-only";
 import { findMembership } from "@/db/queries/memberships";
-import { findSetAccess, findShowAccess } from "@/db/queries/access";
+import { findShowAccess } from "@/db/queries/access";
 import { forbidden, notFound, unauthorized } from "@/lib/http/errors";
 import { can, type Action, type Role } from "./permissions";
 import { getCurrentSession } from "./session";
@@ -42,7 +42,7 @@ export async function requireSet(showId: string, setId: string, action: Action) 
   const user = await requireUser();
   if (!UUID.test(showId)) throw notFound("No such show.");
   // An id that is not a UUID names no set; the show and role are still checked first, as for any set.
-  const row = await findSetAccess(user.id, showId, UUID.test(setId) ? setId : null);
+  const row = await findShowAccess(user.id, showId, UUID.test(setId) ? setId : null);
   const { show, role, set } = showRole(row, action);
   if (!set) throw notFound("No such set.");
   return { user, role, show, set };

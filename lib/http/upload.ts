@@ -1,4 +1,5 @@
 // Reading one file from a multipart/form-data request, with the size limit applied while reading.
+import { decodeUploadText } from "@/lib/imports/text";
 import { readBytesLimited } from "./body";
 import { badRequest, tooLarge } from "./errors";
 
@@ -30,4 +31,11 @@ export async function readUpload(req: Request, maxFileBytes: number, field = "fi
   const fields: Record<string, string> = {};
   for (const [k, v] of form.entries()) if (typeof v === "string") fields[k] = v;
   return { fileName: (file.name || "upload").slice(0, 200), bytes, fields };
+}
+
+/** An uploaded file's text; 400 naming the problem when it is binary or not UTF-8. */
+export function uploadText(bytes: Buffer): string {
+  const decoded = decodeUploadText(bytes);
+  if (!decoded.ok) throw badRequest(decoded.reason, { file: [decoded.reason] });
+  return decoded.text;
 }

@@ -7,8 +7,8 @@ import { describePosition } from "@/lib/field/words";
 import { planDrill, type DrillPlan } from "@/lib/imports/drill";
 import { MAX_DRILL_ROWS, MAX_ROSTER_ROWS } from "@/lib/imports/limits";
 import { planRoster, type RosterPlan } from "@/lib/imports/roster";
-import { badRequest, tooLarge } from "@/lib/http/errors";
-import { decodeUploadText } from "@/lib/imports/text";
+import { tooLarge } from "@/lib/http/errors";
+import { uploadText } from "@/lib/http/upload";
 
 export type ImportKind = "roster-csv" | "drill-csv";
 export type Planned = { kind: "roster-csv"; plan: RosterPlan } | { kind: "drill-csv"; plan: DrillPlan };
@@ -16,9 +16,7 @@ export type Planned = { kind: "roster-csv"; plan: RosterPlan } | { kind: "drill-
 const PREVIEW_DOTS = 500;
 
 export async function planUpload(show: Show, kind: ImportKind, content: Buffer): Promise<Planned> {
-  const decoded = decodeUploadText(content);
-  if (!decoded.ok) throw badRequest(decoded.reason, { file: [decoded.reason] });
-  const text = decoded.text;
+  const text = uploadText(content);
   const context = await loadImportContext(show.id);
   if (kind === "roster-csv") {
     const catalog = await currentCatalog(show.programId);

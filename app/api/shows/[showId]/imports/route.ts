@@ -2,7 +2,6 @@ import { NextResponse } from "next/server";
 import { listUploads, storeUpload } from "@/db/queries/uploads";
 import { requireShow } from "@/lib/auth/access";
 import { MAX_UPLOAD_BYTES } from "@/lib/imports/limits";
-import { decodeUploadText } from "@/lib/imports/text";
 import { badRequest } from "@/lib/http/errors";
 import { route } from "@/lib/http/handler";
 import { readUpload } from "@/lib/http/upload";
@@ -25,8 +24,6 @@ export const POST = route<{ showId: string }>(async (req, { showId }) => {
   const upload = await readUpload(req, MAX_UPLOAD_BYTES);
   const kind = KINDS[upload.fields.kind ?? ""];
   if (!kind) throw badRequest("Say what the file holds: kind must be roster or drill.", { kind: ["Choose roster or drill."] });
-  const decoded = decodeUploadText(upload.bytes);
-  if (!decoded.ok) throw badRequest(decoded.reason, { file: [decoded.reason] });
   const planned = await planUpload(show, kind, upload.bytes);
   const stored = await storeUpload({ programId: show.programId, showId, kind, fileName: upload.fileName, content: upload.bytes, uploadedBy: user.id });
   return NextResponse.json(

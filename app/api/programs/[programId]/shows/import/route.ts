@@ -4,8 +4,7 @@ import { importShowFile } from "@/db/queries/show-export";
 import { requireProgram } from "@/lib/auth/access";
 import { badRequest } from "@/lib/http/errors";
 import { route } from "@/lib/http/handler";
-import { readUpload } from "@/lib/http/upload";
-import { decodeUploadText } from "@/lib/imports/text";
+import { readUpload, uploadText } from "@/lib/http/upload";
 import { readShowFile } from "@/lib/show-file/read";
 import { z } from "zod";
 
@@ -19,9 +18,7 @@ const nameSchema = z.string().trim().min(1).max(160).optional();
 export const POST = route<{ programId: string }>(async (req, { programId }) => {
   const { user } = await requireProgram(programId, "manage-show");
   const upload = await readUpload(req, MAX_SHOW_FILE_BYTES);
-  const decoded = decodeUploadText(upload.bytes);
-  if (!decoded.ok) throw badRequest(decoded.reason, { file: [decoded.reason] });
-  const read = readShowFile(decoded.text);
+  const read = readShowFile(uploadText(upload.bytes));
   if (!read.ok) throw badRequest(read.error, read.issues);
   const name = nameSchema.safeParse(upload.fields.name || undefined);
   if (!name.success) throw badRequest("The new show's name is not valid.", { name: ["Use 1 to 160 characters."] });
