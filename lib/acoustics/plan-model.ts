@@ -12,6 +12,7 @@ import { aWeightingDb } from "./weighting";
 
 const A_WEIGHT_ENERGY = OCTAVE_BANDS.map((b) => 10 ** (aWeightingDb(b.exactHz) / 10));
 const TOP = DYNAMICS.length - 1;
+const BANDS = BAND_COUNT; // a local constant: read in the inner loops
 
 export interface PlanUnit {
   section: string;
@@ -47,9 +48,14 @@ export interface PlanModel {
   playerEnergy: Float64Array[];
   /** Players of each group. */
   groups: number[][];
-  /** The same, flat: members of group g are groupMembers[groupStart[g] … groupStart[g + 1]). */
-  groupStart: Int32Array;
-  groupMembers: Int32Array;
+  /**
+   * The same groups as step tables: the energy of each group's held players, the units playing in it,
+   * and per such unit its summed energy in the group at each step (stepEnergy[g][j][k − kMin] for unit
+   * groupUnits[g][j]). A group's level is then a sum over its units, not over its players.
+   */
+  heldEnergy: Float64Array;
+  groupUnits: Int32Array[];
+  stepEnergy: Float64Array[][];
   residuals: Residual[];
 }
 
@@ -58,22 +64,30 @@ export interface PlanModel {
 function energiesByDynamic(p: BoxPlayer, ratioCache: Map<InstrumentSpec, Float64Array[][]>): Float64Array {
   let ratios = ratioCache.get(p.spec);
   if (!ratios) {
-    const lw = DYNAMICS.map((d) => {
-      const bands = new Float64Array(BAND_COUNT);
+    const power = DYNAMICS.map((d) => {
+      const bands = new Float64Array(BANDS);
       instrumentBandsInto(p.spec, d, bands);
+      for (let b = 0; b < BANDS; b++) bands[b] = 10 ** (bands[b]! / 10);
       return bands;
     });
     // ratios[own][d][b] = 10^((Lw(d, b) − Lw(own, b)) / 10) · A-weighting energy of band b
-    ratios = lw.map((own) => lw.map((at) => Float64Array.from(at, (v, b) => 10 ** ((v - own[b]!) / 10) * A_WEIGHT_ENERGY[b]!)));
+    ratios = power.map((own) =>
+      power.map((at) => {
+        const r = new Float64Array(BANDS);
+        for (let b = 0; b < BANDS; b++) r[b] = (at[b]! / own[b]!) * A_WEIGHT_ENERGY[b]!;
+        return r;
+      }),
+    );
     ratioCache.set(p.spec, ratios);
   }
   const own = ratios[DYNAMICS.indexOf(p.dynamic)]!;
-  const band = Float64Array.from(p.bandsDb, (v) => 10 ** (v / 10));
+  const band = new Float64Array(BANDS);
+  for (let b = 0; b < BANDS; b++) band[b] = 10 ** (p.bandsDb[b]! / 10);
   const out = new Float64Array(DYNAMICS.length);
   for (let d = 0; d <= TOP; d++) {
     const r = own[d]!;
     let e = 0;
-    for (let b = 0; b < BAND_COUNT; b++) e += band[b]! * r[b]!;
+    for (let b = 0; b < BANDS; b++) e += band[b]! * r[b]!;
     out[d] = e;
   }
   return out;
@@ -119,7 +133,8 @@ export function buildPlanModel(
   const playerEnergy: Float64Array[] = [];
   const groups: number[][] = [];
   const residuals: Residual[] = [];
-  const groupUnits = (g: number) => [...new Set(groups[g]!.map((p) => playerUnit[p]!).filter((u) => u >= 0))];
+  const unitsOfGroup: number[][] = [];
+  const groupUnits = (g: number) => (unitsOfGroup[g] ??= [...new Set(groups[g]!.map((p) => playerUnit[p]!).filter((u) => u >= 0))]);
 
   sets.forEach((players, n) => {
     const index = new Map<BoxPlayer, number>();
@@ -199,40 +214,28 @@ export function buildPlanModel(
     }
   });
 
-  return {
+  const model = {
     units,
     playerUnit: Int32Array.from(playerUnit),
     playerBase: Int32Array.from(playerBase),
     playerEnergy,
     groups,
-    groupStart: Int32Array.from(groups.reduce((starts, l) => [...starts, starts[starts.length - 1]! + l.length], [0])),
-    groupMembers: Int32Array.from(groups.flat()),
     residuals,
   };
+  return { ...model, ...stepTables(model) };
 }
 
-/** Sum of squared target residuals for whole steps k per unit: the fast path of the step search. */
-/** Per group: the energy of its held players, and per unit playing in it the unit's summed energy at each step. */
-interface StepTables {
-  fixed: Float64Array;
-  units: Int32Array[];
-  /** tables[g][j][k - kMin] for unit units[g][j]. */
-  tables: Float64Array[][];
-}
-const stepTablesOf = new WeakMap<PlanModel, StepTables>();
-
-function stepTables(m: PlanModel): StepTables {
-  const cached = stepTablesOf.get(m);
-  if (cached) return cached;
-  const G = m.groups.length;
-  const t: StepTables = { fixed: new Float64Array(G), units: [], tables: [] };
-  for (let g = 0; g < G; g++) {
+/** Step tables of the groups (see PlanModel). */
+function stepTables(m: Pick<PlanModel, "units" | "playerUnit" | "playerBase" | "playerEnergy" | "groups">) {
+  const heldEnergy = new Float64Array(m.groups.length);
+  const groupUnits: Int32Array[] = [];
+  const stepEnergy: Float64Array[][] = [];
+  m.groups.forEach((members, g) => {
     const byUnit = new Map<number, Float64Array>();
-    for (let i = m.groupStart[g]!; i < m.groupStart[g + 1]!; i++) {
-      const p = m.groupMembers[i]!;
+    for (const p of members) {
       const u = m.playerUnit[p]!;
       if (u < 0) {
-        t.fixed[g]! += m.playerEnergy[p]![m.playerBase[p]!]!;
+        heldEnergy[g]! += m.playerEnergy[p]![m.playerBase[p]!]!;
         continue;
       }
       const unit = m.units[u]!;
@@ -240,29 +243,53 @@ function stepTables(m: PlanModel): StepTables {
       if (!table) byUnit.set(u, (table = new Float64Array(unit.kMax - unit.kMin + 1)));
       for (let k = unit.kMin; k <= unit.kMax; k++) table[k - unit.kMin]! += m.playerEnergy[p]![m.playerBase[p]! + k]!;
     }
-    t.units.push(Int32Array.from(byUnit.keys()));
-    t.tables.push([...byUnit.values()]);
-  }
-  stepTablesOf.set(m, t);
-  return t;
+    groupUnits.push(Int32Array.from(byUnit.keys()));
+    stepEnergy.push([...byUnit.values()]);
+  });
+  return { heldEnergy, groupUnits, stepEnergy };
 }
 
-/** Sum of squared target residuals for whole steps k per unit; the polish calls it for every trial move,
- * so each group's energy comes from per-unit step tables rather than from its players one by one. */
-export function targetCostAtSteps(m: PlanModel, k: readonly number[]): number {
-  const t = stepTables(m);
-  const G = m.groups.length;
-  const L = new Float64Array(G);
-  for (let g = 0; g < G; g++) {
-    let e = t.fixed[g]!;
-    const units = t.units[g]!;
-    const tables = t.tables[g]!;
+/**
+ * Level (dB) of each group with unit u at step k[u], its energy there also scaled by factor[u] when given;
+ * with `share`, also each playing unit's share of the group's energy (share[g][j] for groupUnits[g][j]).
+ */
+function levels(m: PlanModel, k: ArrayLike<number>, factor?: ArrayLike<number>, share?: Float64Array[]): Float64Array {
+  const L = new Float64Array(m.groups.length);
+  for (let g = 0; g < L.length; g++) {
+    const units = m.groupUnits[g]!;
+    const tables = m.stepEnergy[g]!;
+    const part = share?.[g];
+    let e = m.heldEnergy[g]!;
     for (let j = 0; j < units.length; j++) {
       const u = units[j]!;
-      e += tables[j]![k[u]! - m.units[u]!.kMin]!;
+      const ej = tables[j]![k[u]! - m.units[u]!.kMin]! * (factor ? factor[u]! : 1);
+      if (part) part[j] = ej;
+      e += ej;
     }
+    if (part) for (let j = 0; j < part.length; j++) part[j]! /= e;
     L[g] = 10 * Math.log10(e);
   }
+  return L;
+}
+
+const sharesOf = (m: PlanModel) => m.groupUnits.map((units) => new Float64Array(units.length));
+
+/** Group levels and unit shares at whole steps k per unit (exact). */
+export function levelsAtSteps(m: PlanModel, k: readonly number[]) {
+  const share = sharesOf(m);
+  return { L: levels(m, k, undefined, share), share };
+}
+
+/** Group levels and unit shares (∂L/∂x) for a uniform dB shift x[u] from the written dynamic (the continuous relaxation). */
+export function levelsAtShifts(m: PlanModel, x: readonly number[]) {
+  const share = sharesOf(m);
+  const written = new Array<number>(m.units.length).fill(0);
+  return { L: levels(m, written, x.map((v) => 10 ** (v / 10)), share), share };
+}
+
+/** Sum of squared target residuals for whole steps k per unit; the polish calls it for every trial move. */
+export function targetCostAtSteps(m: PlanModel, k: readonly number[]): number {
+  const L = levels(m, k);
   let cost = 0;
   for (const r of m.residuals) {
     let v = r.c;
@@ -272,48 +299,8 @@ export function targetCostAtSteps(m: PlanModel, k: readonly number[]): number {
   return cost;
 }
 
-/** Player energies for whole steps k per unit (exact). */
-export function energiesAtSteps(m: PlanModel, k: readonly number[]): Float64Array {
-  const out = new Float64Array(m.playerUnit.length);
-  for (let p = 0; p < out.length; p++) {
-    const u = m.playerUnit[p]!;
-    out[p] = m.playerEnergy[p]![m.playerBase[p]! + (u >= 0 ? k[u]! : 0)]!;
-  }
-  return out;
-}
-
-/** Player energies for a uniform dB shift x per unit (the continuous relaxation). */
-export function energiesAtShifts(m: PlanModel, x: readonly number[]): Float64Array {
-  const factor = x.map((v) => 10 ** (v / 10)); // once a unit, not once a player
-  const out = new Float64Array(m.playerUnit.length);
-  for (let p = 0; p < out.length; p++) {
-    const u = m.playerUnit[p]!;
-    out[p] = m.playerEnergy[p]![m.playerBase[p]!]! * (u >= 0 ? factor[u]! : 1);
-  }
-  return out;
-}
-
-/** Level (dB) of each group, and each unit's share of each group's energy (∂L/∂x of a uniform shift). */
-export function groupLevels(m: PlanModel, energy: Float64Array): { L: number[]; share: Map<number, number>[] } {
-  const L: number[] = [];
-  const share: Map<number, number>[] = [];
-  for (const members of m.groups) {
-    let total = 0;
-    const byUnit = new Map<number, number>();
-    for (const p of members) {
-      total += energy[p]!;
-      const u = m.playerUnit[p]!;
-      if (u >= 0) byUnit.set(u, (byUnit.get(u) ?? 0) + energy[p]!);
-    }
-    for (const [u, e] of byUnit) byUnit.set(u, e / total);
-    L.push(10 * Math.log10(total));
-    share.push(byUnit);
-  }
-  return { L, share };
-}
-
 /** Value of each target residual (dB, ≥ 0) at the given group levels. */
-export function residualValues(m: PlanModel, L: readonly number[]): number[] {
+export function residualValues(m: PlanModel, L: ArrayLike<number>): number[] {
   return m.residuals.map((r) => Math.max(0, r.terms.reduce((s, t) => s + t.coef * L[t.group]!, r.c)));
 }
 

@@ -5,14 +5,13 @@
 // Solve: a bounded least-squares over each section's dB change (targets as hinge residuals,
 // plus a small weight on each change), then whole dynamic steps: the continuous optimum rounded
 // to the nearest step and polished by single and paired step moves on the exact step levels.
-import { boundedLeastSquares } from "./bounded-least-squares";
+import { boundedLeastSquares, type ResidualModel, type SparseRow } from "./bounded-least-squares";
 import { AcousticsInputError } from "./errors";
 import { createSetEvaluator } from "./evaluator";
 import {
   buildPlanModel,
-  energiesAtShifts,
-  energiesAtSteps,
-  groupLevels,
+  levelsAtShifts,
+  levelsAtSteps,
   residualValues,
   unitChangeDb,
   targetCostAtSteps,
@@ -60,23 +59,31 @@ function pointResultAt(input: PlanInput, listeningPointId: string) {
   return evaluator.result().points[0]!;
 }
 
-/** The continuous relaxation: residuals (targets, then each change) and their Jacobian. */
-function relaxation(m: PlanModel) {
+/** The continuous relaxation: residuals (targets, then each change) and their sparse Jacobian. */
+function relaxation(m: PlanModel): ResidualModel {
   const U = m.units.length;
+  const dense = new Float64Array(U); // one row's entries, gathered before they are listed
   return {
     evaluate(x: readonly number[]) {
-      const { L, share } = groupLevels(m, energiesAtShifts(m, x));
+      const { L, share } = levelsAtShifts(m, x);
       const values = residualValues(m, L);
-      const J: number[][] = m.residuals.map((res, i) => {
-        const row = new Array<number>(U).fill(0);
-        if (values[i]! > 0) for (const t of res.terms) for (const [u, s] of share[t.group]!) row[u]! += t.coef * s;
-        return row;
+      const J: SparseRow[] = m.residuals.map((res, i) => {
+        const cols: number[] = [];
+        if (values[i]! <= 0) return { cols, vals: [] };
+        for (const t of res.terms) {
+          const units = m.groupUnits[t.group]!;
+          const parts = share[t.group]!;
+          for (let j = 0; j < units.length; j++) {
+            const u = units[j]!;
+            if (!cols.includes(u)) cols.push(u);
+            dense[u]! += t.coef * parts[j]!;
+          }
+        }
+        const vals = cols.map((u) => dense[u]!);
+        cols.forEach((u) => (dense[u] = 0));
+        return { cols, vals };
       });
-      for (let u = 0; u < U; u++) {
-        const row = new Array<number>(U).fill(0);
-        row[u] = CHANGE_WEIGHT;
-        J.push(row);
-      }
+      for (let u = 0; u < U; u++) J.push({ cols: [u], vals: [CHANGE_WEIGHT] });
       return { r: [...values, ...x.map((v) => CHANGE_WEIGHT * v)], J };
     },
   };
@@ -157,15 +164,14 @@ export function solveBalancePlan(
   const k = polishSteps(m, change, rounded);
 
   // What stays unmet, worst over the sets, and which way each section is pushed.
-  const energy = energiesAtSteps(m, k);
-  const { L, share } = groupLevels(m, energy);
+  const { L, share } = levelsAtSteps(m, k);
   const values = residualValues(m, L);
   const unmetByKey = new Map<string, UnmetTarget & { units: Set<number> }>();
   const push = new Array<number>(U).fill(0); // ∂(target cost)/∂(uniform shift)
   m.residuals.forEach((res, i) => {
     const v = values[i]!;
     if (v <= 0) return;
-    for (const term of res.terms) for (const [u, s] of share[term.group]!) push[u]! += 2 * v * term.coef * s;
+    for (const term of res.terms) m.groupUnits[term.group]!.forEach((u, j) => (push[u]! += 2 * v * term.coef * share[term.group]![j]!));
     if (v <= UNMET_TOLERANCE_DB) return;
     const seen = unmetByKey.get(res.key);
     if (!seen || seen.shortDb < v) {
