@@ -154,10 +154,11 @@ function wideFormEdges(players: BoxPlayer[], t: BalanceTargets): CheckResult {
   return { id: "wide-form-edges", passed: false, detail: `The form spans ${yards(width)}: ${failures.join("; ")}. The end players should back off.`, performerIds: flagged };
 }
 
-function median(values: number[]): number {
-  const s = [...values].sort((a, b) => a - b);
-  const m = s.length >> 1;
-  return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2;
+/** The median of `sorted` (ascending) without its element at index `skip`, as if that element were removed. */
+function medianWithout(sorted: readonly number[], skip: number): number {
+  const n = sorted.length - 1;
+  const at = (r: number) => sorted[r < skip ? r : r + 1]!;
+  return n % 2 ? at(n >> 1) : (at(n / 2 - 1) + at(n / 2)) / 2;
 }
 
 /**
@@ -170,9 +171,13 @@ function standOuts(players: BoxPlayer[], t: BalanceTargets): CheckResult {
   for (const list of groupBy(players, (p) => `${p.section}\u0000${p.instrument}`).values()) {
     const section = list[0]!.section;
     if (list.length < 2) continue;
+    // Each player against the median of the others: one sort a section, not one a player.
+    const order = list.map((_, i) => i).sort((a, b) => list[a]!.dbA - list[b]!.dbA);
+    const sorted = order.map((i) => list[i]!.dbA);
+    const rank: number[] = [];
+    order.forEach((i, r) => (rank[i] = r));
     list.forEach((p, i) => {
-      const rest = list.filter((_, j) => j !== i).map((q) => q.dbA);
-      const excess = p.dbA - median(rest);
+      const excess = p.dbA - medianWithout(sorted, rank[i]!);
       if (excess > t.standOutDb) flagged.push({ id: p.id, section, excess });
     });
   }
