@@ -250,25 +250,26 @@ function stepTables(m: Pick<PlanModel, "units" | "playerUnit" | "playerBase" | "
 }
 
 /**
- * Level (dB) of each group with unit u at step k[u], its energy there also scaled by factor[u] when given;
- * with `share`, also each playing unit's share of the group's energy (share[g][j] for groupUnits[g][j]).
+ * Level (dB) of group g with unit u at step k[u], its energy there also scaled by factor[u] when given;
+ * with `share`, also each playing unit's share of the group's energy (share[j] for groupUnits[g][j]).
  */
+function groupLevel(m: PlanModel, g: number, k: ArrayLike<number>, factor?: ArrayLike<number>, share?: Float64Array): number {
+  const units = m.groupUnits[g]!;
+  const tables = m.stepEnergy[g]!;
+  let e = m.heldEnergy[g]!;
+  for (let j = 0; j < units.length; j++) {
+    const u = units[j]!;
+    const ej = tables[j]![k[u]! - m.units[u]!.kMin]! * (factor ? factor[u]! : 1);
+    if (share) share[j] = ej;
+    e += ej;
+  }
+  if (share) for (let j = 0; j < share.length; j++) share[j]! /= e;
+  return 10 * Math.log10(e);
+}
+
 function levels(m: PlanModel, k: ArrayLike<number>, factor?: ArrayLike<number>, share?: Float64Array[]): Float64Array {
   const L = new Float64Array(m.groups.length);
-  for (let g = 0; g < L.length; g++) {
-    const units = m.groupUnits[g]!;
-    const tables = m.stepEnergy[g]!;
-    const part = share?.[g];
-    let e = m.heldEnergy[g]!;
-    for (let j = 0; j < units.length; j++) {
-      const u = units[j]!;
-      const ej = tables[j]![k[u]! - m.units[u]!.kMin]! * (factor ? factor[u]! : 1);
-      if (part) part[j] = ej;
-      e += ej;
-    }
-    if (part) for (let j = 0; j < part.length; j++) part[j]! /= e;
-    L[g] = 10 * Math.log10(e);
-  }
+  for (let g = 0; g < L.length; g++) L[g] = groupLevel(m, g, k, factor, share?.[g]);
   return L;
 }
 
@@ -287,9 +288,8 @@ export function levelsAtShifts(m: PlanModel, x: readonly number[]) {
   return { L: levels(m, written, x.map((v) => 10 ** (v / 10)), share), share };
 }
 
-/** Sum of squared target residuals for whole steps k per unit; the polish calls it for every trial move. */
-export function targetCostAtSteps(m: PlanModel, k: readonly number[]): number {
-  const L = levels(m, k);
+/** Sum of squared target residuals at the given group levels. */
+function targetCost(m: PlanModel, L: ArrayLike<number>): number {
   let cost = 0;
   for (const r of m.residuals) {
     let v = r.c;
@@ -297,6 +297,50 @@ export function targetCostAtSteps(m: PlanModel, k: readonly number[]): number {
     if (v > 0) cost += v * v;
   }
   return cost;
+}
+
+/**
+ * Whole steps k per unit and the group levels there, for the polish's trial moves: a move of one or
+ * two units re-levels only the groups those units play in, and undo() puts them back.
+ */
+export function stepSearch(m: PlanModel, start: readonly number[]) {
+  const unitGroups = m.units.map((): number[] => []);
+  m.groupUnits.forEach((units, g) => units.forEach((u) => unitGroups[u]!.push(g)));
+  const k = [...start];
+  const L = levels(m, k);
+  const seen = new Int32Array(m.groups.length);
+  let mark = 0;
+  let undo: { move: readonly (readonly [number, number])[]; groups: number[]; levels: number[] } | null = null;
+  return {
+    k: k as readonly number[],
+    targetCost: () => targetCost(m, L),
+    /** Moves unit u by d steps for each [u, d], unless that leaves pp…fff (then nothing moves and it answers false). */
+    move(move: readonly (readonly [number, number])[]): boolean {
+      if (move.some(([u, d]) => k[u]! + d < m.units[u]!.kMin || k[u]! + d > m.units[u]!.kMax)) return false;
+      for (const [u, d] of move) k[u]! += d;
+      mark++;
+      const groups: number[] = [];
+      const before: number[] = [];
+      for (const [u] of move) {
+        for (const g of unitGroups[u]!) {
+          if (seen[g] === mark) continue;
+          seen[g] = mark;
+          groups.push(g);
+          before.push(L[g]!);
+          L[g] = groupLevel(m, g, k);
+        }
+      }
+      undo = { move, groups, levels: before };
+      return true;
+    },
+    /** Takes back the last move. */
+    undo() {
+      if (!undo) return;
+      for (const [u, d] of undo.move) k[u]! -= d;
+      undo.groups.forEach((g, i) => (L[g] = undo!.levels[i]!));
+      undo = null;
+    },
+  };
 }
 
 /** Value of each target residual (dB, ≥ 0) at the given group levels. */

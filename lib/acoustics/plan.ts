@@ -14,7 +14,7 @@ import {
   levelsAtSteps,
   residualValues,
   unitChangeDb,
-  targetCostAtSteps,
+  stepSearch,
   type PlanModel,
   type TargetKind,
 } from "./plan-model";
@@ -91,49 +91,41 @@ function relaxation(m: PlanModel): ResidualModel {
 
 /** Whole steps: nearest to the continuous optimum, then single (±1, ±2) and paired (±1, ±1) moves while the cost falls. */
 function polishSteps(m: PlanModel, change: number[][], start: number[]): number[] {
-  const cost = (k: readonly number[]) => {
-    let c = targetCostAtSteps(m, k);
-    k.forEach((s, u) => (c += (CHANGE_WEIGHT * change[u]![s - m.units[u]!.kMin]!) ** 2));
+  const search = stepSearch(m, start);
+  const cost = () => {
+    let c = search.targetCost();
+    search.k.forEach((s, u) => (c += (CHANGE_WEIGHT * change[u]![s - m.units[u]!.kMin]!) ** 2));
     return c;
   };
-  const inRange = (k: readonly number[]) => k.every((s, u) => s >= m.units[u]!.kMin && s <= m.units[u]!.kMax);
+  type Move = [unit: number, steps: number][];
   const U = m.units.length;
-  const moves: number[][] = [];
-  for (let u = 0; u < U; u++) for (const d of [-2, -1, 1, 2]) moves.push(Object.assign(new Array<number>(U).fill(0), { [u]: d }));
+  const singles: Move[] = [];
+  for (let u = 0; u < U; u++) for (const d of [-2, -1, 1, 2]) singles.push([[u, d]]);
+  const pairs: Move[] = [];
   for (let a = 0; a < U; a++) {
     for (let b = a + 1; b < U; b++) {
-      for (const da of [-1, 1]) for (const db of [-1, 1]) moves.push(Object.assign(new Array<number>(U).fill(0), { [a]: da, [b]: db }));
+      for (const da of [-1, 1]) for (const db of [-1, 1]) pairs.push([[a, da], [b, db]]);
     }
   }
-  let k = [...start];
-  let best = cost(k);
-  const singles = moves.slice(0, U * 4);
-  for (let round = 0; round < 100; round++) {
+  let best = cost();
+  /** Tries each move from the current steps, keeping those that lower the cost; true if one did. */
+  const sweep = (moves: Move[]) => {
     let improved = false;
-    for (const move of singles) {
-      const trial = k.map((s, u) => s + move[u]!);
-      if (!inRange(trial)) continue;
-      const c = cost(trial);
+    for (const move of moves) {
+      if (!search.move(move)) continue;
+      const c = cost();
       if (c < best - 1e-12) {
         best = c;
-        k = trial;
         improved = true;
-      }
+      } else search.undo();
     }
-    if (improved) continue;
-    for (const move of moves.slice(U * 4)) {
-      const trial = k.map((s, u) => s + move[u]!);
-      if (!inRange(trial)) continue;
-      const c = cost(trial);
-      if (c < best - 1e-12) {
-        best = c;
-        k = trial;
-        improved = true;
-      }
-    }
-    if (!improved) break;
+    return improved;
+  };
+  for (let round = 0; round < 100; round++) {
+    if (sweep(singles)) continue;
+    if (!sweep(pairs)) break;
   }
-  return k;
+  return [...search.k];
 }
 
 /**
