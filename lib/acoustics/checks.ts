@@ -154,6 +154,18 @@ function wideFormEdges(players: BoxPlayer[], t: BalanceTargets): CheckResult {
   return { id: "wide-form-edges", passed: false, detail: `The form spans ${yards(width)}: ${failures.join("; ")}. The end players should back off.`, performerIds: flagged };
 }
 
+/** The first index of `value` in `sorted` (ascending), which holds it. */
+function firstIndexOf(sorted: readonly number[], value: number): number {
+  let lo = 0;
+  let hi = sorted.length - 1;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (sorted[mid]! < value) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
+
 /** The median of `sorted` (ascending) without its element at index `skip`, as if that element were removed. */
 function medianWithout(sorted: readonly number[], skip: number): number {
   const n = sorted.length - 1;
@@ -171,15 +183,13 @@ function standOuts(players: BoxPlayer[], t: BalanceTargets): CheckResult {
   for (const list of groupBy(players, (p) => `${p.section}\u0000${p.instrument}`).values()) {
     const section = list[0]!.section;
     if (list.length < 2) continue;
-    // Each player against the median of the others: one sort a section, not one a player.
-    const order = list.map((_, i) => i).sort((a, b) => list[a]!.dbA - list[b]!.dbA);
-    const sorted = order.map((i) => list[i]!.dbA);
-    const rank: number[] = [];
-    order.forEach((i, r) => (rank[i] = r));
-    list.forEach((p, i) => {
-      const excess = p.dbA - medianWithout(sorted, rank[i]!);
+    // Each player against the median of the others: one sort a section, not one a player. Removing any
+    // element equal to the player's level leaves the same others, so its first place in the sort will do.
+    const sorted = list.map((p) => p.dbA).sort((a, b) => a - b);
+    for (const p of list) {
+      const excess = p.dbA - medianWithout(sorted, firstIndexOf(sorted, p.dbA));
       if (excess > t.standOutDb) flagged.push({ id: p.id, section, excess });
-    });
+    }
   }
   if (flagged.length === 0) {
     return { id: "stand-outs", passed: true, detail: `No player is more than ${formatDb(t.standOutDb)} above the rest of their section at the box.`, performerIds: [] };
