@@ -19,7 +19,7 @@ export const tooManyAttempts = (message: string) => new HttpError(429, message);
 export const badRequest = (message: string, issues?: Record<string, string[]>) =>
   new HttpError(400, message, issues ? { issues } : {});
 
-/** True for errors that mean the database cannot be reached (refused, reset, timed out, shutting down). */
+/** True for errors that mean the database cannot be reached (refused, reset, closed under a write, timed out, shutting down). */
 export function isDatabaseDown(err: unknown): boolean {
   const seen = new Set<unknown>();
   let e: unknown = err;
@@ -28,7 +28,7 @@ export function isDatabaseDown(err: unknown): boolean {
     const code = (e as { code?: string }).code;
     if (
       code &&
-      ["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "CONNECT_TIMEOUT", "CONNECTION_CLOSED", "CONNECTION_ENDED", "CONNECTION_DESTROYED", "57P01", "57P02", "57P03", "08006", "08001", "08003", "08004"].includes(code)
+      ["ECONNREFUSED", "ECONNRESET", "EPIPE", "ETIMEDOUT", "CONNECT_TIMEOUT", "CONNECTION_CLOSED", "CONNECTION_ENDED", "CONNECTION_DESTROYED", "57P01", "57P02", "57P03", "08006", "08001", "08003", "08004"].includes(code)
     ) {
       return true;
     }
@@ -36,3 +36,21 @@ export function isDatabaseDown(err: unknown): boolean {
   }
   return false;
 }
+
+/**
+ * An unexpected error for the log: its stack and the codes and messages of its causes, without the
+ * query parameters a database error carries (they can hold session ids, e-mail addresses and hashes).
+ */
+export function describeError(err: unknown): string {
+  const lines: string[] = [];
+  const seen = new Set<unknown>();
+  for (let e: unknown = err; e && !seen.has(e); e = (e as { cause?: unknown }).cause) {
+    seen.add(e);
+    const text = e instanceof Error ? (e === err ? (e.stack ?? e.message) : e.message) : String(e);
+    const code = (e as { code?: unknown }).code;
+    const kept = text.split("\n").filter((l) => !/^\s*params:/.test(l)).join("\n");
+    lines.push(e === err ? kept : `caused by${code ? ` [${String(code)}]` : ""}: ${kept.split("\n")[0]}`);
+  }
+  return lines.join("\n");
+}
+

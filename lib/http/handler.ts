@@ -2,7 +2,7 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { fieldIssues } from "./body";
-import { HttpError, isDatabaseDown } from "./errors";
+import { describeError, HttpError, isDatabaseDown } from "./errors";
 import { API_CSP, setSecurityHeaders } from "./security-headers";
 
 type Ctx<P> = { params: Promise<P> };
@@ -17,7 +17,7 @@ export function errorResponse(err: unknown): NextResponse {
   if (isDatabaseDown(err)) {
     return NextResponse.json({ error: "The database cannot be reached right now. Try again in a moment." }, { status: 503 });
   }
-  console.error("[farfield] unexpected error:", err instanceof Error ? err.stack : err);
+  console.error("[farfield] unexpected error:", describeError(err));
   return NextResponse.json({ error: "Something went wrong on our side." }, { status: 500 });
 }
 

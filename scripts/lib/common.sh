@@ -30,7 +30,8 @@ ensure_chromium() {
 # npm ci when node_modules is missing or older than the lock file's content.
 ensure_node_modules() {
   local stamp="$ROOT/node_modules/.farfield-lock" want
-  want="$(sha256sum "$ROOT/package-lock.json" | cut -d' ' -f1)"
+  # The lockfile and the patches applied after install (patch-package, on postinstall).
+  want="$(cat "$ROOT/package-lock.json" "$ROOT"/patches/*.patch 2>/dev/null | sha256sum | cut -d' ' -f1)"
   if [ ! -f "$stamp" ] || [ "$(cat "$stamp")" != "$want" ]; then
     log "installing npm packages (npm ci)"
     (cd "$ROOT" && npm ci --no-audit --no-fund --loglevel=error)
