@@ -53,4 +53,3 @@ export function describeError(err: unknown): string {
   }
   return lines.join("\n");
 }
-
