@@ -27,3 +27,5 @@ export { hearingMap, EAR_HEIGHT_M, HEARING_MIN_DISTANCE_M, type HearingOptions, 
 export { checkBalance } from "./checks";
 export { planBalance, solveBalancePlan, applyPlan, type PlanEntryDetail, type BalancePlan, type UnmetTarget, type PlanInput } from "./plan";
 export { DEFAULT_TARGETS, resolveTargets, TARGET_RANGES, type BalanceTargets } from "./targets";
+export { loudnessIso532_1, soneToPhon, phonToSone, type Loudness, type SoundField } from "./loudness";
+export { THIRD_OCTAVE_COUNT, THIRD_OCTAVE_NOMINAL_HZ } from "./loudness-tables";
