@@ -1,4 +1,5 @@
 // The music of a show as the API takes it: phrases, per-section voices and written dynamics, per-performer overrides.
+import { uniqueBy } from "./unique";
 import { z } from "./zod";
 import { DYNAMICS } from "@/lib/acoustics/types";
 
@@ -21,7 +22,11 @@ export const phrasePatchSchema = phraseSchema
 
 /** Bulk change of section rows: every listed row gets the given voice and/or written dynamic. */
 export const assignmentsPatchSchema = z.object({
-  rows: z.array(z.object({ phraseId: id("phraseId"), section: z.string().min(1).max(120) })).min(1, "Select at least one row.").max(2000),
+  rows: z
+    .array(z.object({ phraseId: id("phraseId"), section: z.string().min(1).max(120) }))
+    .min(1, "Select at least one row.")
+    .max(2000)
+    .superRefine(uniqueBy((r) => `${r.phraseId}|${r.section}`, (r) => `Section ${r.section} of phrase ${r.phraseId} is selected twice.`)),
   voice: voice.optional(),
   writtenDynamic: dynamic.optional(),
 }).strict().refine((b) => b.voice !== undefined || b.writtenDynamic !== undefined, { message: "Give a voice or a written dynamic to set.", path: ["voice"] });
@@ -33,7 +38,13 @@ export const overrideSchema = z.object({
   writtenDynamic: dynamic,
   note: z.string().max(500, "That note is too long.").default(""),
 });
-export const overridesPutSchema = z.object({ overrides: z.array(overrideSchema).min(1).max(500) });
+export const overridesPutSchema = z.object({
+  overrides: z
+    .array(overrideSchema)
+    .min(1)
+    .max(500)
+    .superRefine(uniqueBy((o) => `${o.phraseId}|${o.performerId}`, (o) => `Performer ${o.performerId} has two overrides for phrase ${o.phraseId}; give one.`)),
+});
 export const overrideDeleteSchema = z.object({ phraseId: id("phraseId"), performerId: id("performerId") });
 
 export const adoptPlanSchema = z.object({

@@ -1,4 +1,5 @@
 // A set's positions as the API takes them (shared/API.md): metres in the field frame, facing in degrees.
+import { uniqueBy } from "./unique";
 import { z } from "./zod";
 
 /** Positions may lie at most this far beyond a sideline or end line (shared/API.md). */
@@ -18,7 +19,10 @@ export const positionSchema = z.object({
 
 export const savePositionsSchema = z.object({
   version: z.number().int().min(1),
-  positions: z.array(positionSchema).max(2000, "At most 2000 positions per save."),
+  positions: z
+    .array(positionSchema)
+    .max(2000, "At most 2000 positions per save.")
+    .superRefine(uniqueBy((p) => p.performerId, (p) => `Performer ${p.performerId} is listed twice; give one position per performer.`)),
 });
 
 export type SavePositionsBody = z.infer<typeof savePositionsSchema>;
