@@ -174,18 +174,3 @@ describe("who may invite", () => {
     expect(Object.keys(res.body.issues).sort()).toEqual(["email", "role"]);
   });
 });
-
-describe("the local mailbox", () => {
-  it("shows kept messages to the demo's directors only", async () => {
-    const email = uniqueEmail("mailbox");
-    await invite(email);
-    const res = await ids.director.get("/api/dev/mail");
-    expect(res.status).toBe(200);
-    expect(res.body.messages.some((m: any) => m.to.includes(email))).toBe(true);
-    expect((await (await signedIn(DEMO.staff)).get("/api/dev/mail")).status).toBe(403);
-    const own = new Client();
-    await own.post("/api/auth/sign-up", { name: "Not Demo", email: uniqueEmail("nd"), password: "not-demo-password", programName: "Elsewhere" });
-    expect((await own.get("/api/dev/mail")).status).toBe(403);
-    expect((await new Client().get("/api/dev/mail")).status).toBe(401);
-  });
-});

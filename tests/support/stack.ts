@@ -65,13 +65,13 @@ export interface App {
   stop(): Promise<void>;
 }
 
-/** The production build served against `databaseUrl` on a free port. */
-export async function startApp(databaseUrl: string): Promise<App> {
+/** The production build served against `databaseUrl` on a free port; `env` adds or overrides variables. */
+export async function startApp(databaseUrl: string, env: Record<string, string> = {}): Promise<App> {
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
   const proc = spawn(path.join(ROOT, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
     cwd: ROOT,
-    env: { ...process.env, DATABASE_URL: databaseUrl, APP_BASE_URL: url, PORT: String(port) },
+    env: { ...process.env, DATABASE_URL: databaseUrl, APP_BASE_URL: url, PORT: String(port), ...env },
     stdio: "ignore",
   });
   const deadline = Date.now() + 60_000;

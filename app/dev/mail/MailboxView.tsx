@@ -23,17 +23,17 @@ function Linked({ text }: { text: string }) {
   );
 }
 
-export function MailboxView() {
+export function MailboxView({ email }: { email: string }) {
   const mail = useApi<{ messages: Message[] }>("/api/dev/mail");
   return (
     <>
-      <PageTitle sub="What Farfield sent through the local fake SMTP server (npm start, npm run dev, npm test). A real deployment sends through its SMTP provider instead.">Local mailbox</PageTitle>
+      <PageTitle sub={`For local use only: what Farfield sent to ${email} through the local fake SMTP server (npm start, npm run dev, npm test). A real deployment sends through its SMTP provider instead.`}>Local mailbox</PageTitle>
       {mail.error ? (
         <ErrorState error={mail.error} what="mailbox" onRetry={() => mail.mutate()} />
       ) : !mail.data ? (
         <p role="status">Opening the mailbox…</p>
       ) : mail.data.messages.length === 0 ? (
-        <p className="text-ink-soft">No messages yet.</p>
+        <p className="text-ink-soft">No messages to {email} yet.</p>
       ) : (
         <ul className="space-y-4">
           {mail.data.messages.slice(0, 50).map((m) => (

@@ -7,13 +7,13 @@ import { MailboxView } from "./MailboxView";
 
 export const metadata: Metadata = { title: "Local mailbox" };
 
-/** The messages the local fake SMTP server kept; the API decides who may read them. */
+/** The messages the local fake SMTP server kept for the signed-in person (the API filters them by address). */
 export default async function MailboxPage() {
   if (!mailboxEnabled()) notFound();
   const user = await requireSignedIn("/dev/mail");
   return (
     <PageShell userName={user.name}>
-      <MailboxView />
+      <MailboxView email={user.email} />
     </PageShell>
   );
 }
