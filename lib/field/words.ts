@@ -75,15 +75,16 @@ export type WordsResult = { ok: true; x: number; y: number } | { ok: false; erro
 
 const NUMBER = String.raw`(\d+(?:\.\d+)?(?:\s+\d+\/\d+)?|\d+\/\d+)`;
 
-/** "2", "2.5", "2 1/2", "1/2" → number. */
-function parseNumber(s: string): number {
-  return s
+/** "2", "2.5", "2 1/2", "1/2" → number of steps; a reason for what is no number ("0/0", "1/0"). */
+function parseSteps(s: string): number | string {
+  const n = s
     .trim()
     .split(/\s+/)
     .reduce((sum, part) => {
       const [a, b] = part.split("/");
       return sum + (b === undefined ? Number(a) : Number(a) / Number(b));
     }, 0);
+  return Number.isFinite(n) ? n : `"${s.trim()}" is not a number of steps`;
 }
 
 const SIDE_PREFIX = /^\s*(?:side|s)\s*([12])\s*[:,\-–]?\s*/;
@@ -117,7 +118,9 @@ function parseSideToSide(part: string, side: Side | null): number | string {
   if (on) yard = yardOf(on[1], on[2]);
   else if (off) {
     yard = yardOf(off[3], off[4]);
-    steps = parseNumber(off[1]) * (off[2].startsWith("out") ? 1 : -1);
+    const n = parseSteps(off[1]);
+    if (typeof n === "string") return n;
+    steps = n * (off[2].startsWith("out") ? 1 : -1);
   } else return `"${part}" is not a yard-line position (e.g. "2 steps outside the 35 yard line")`;
   if (typeof yard === "string") return yard;
   const fromFifty = ((50 - yard) / 5) * STEPS_PER_FIVE_YARDS + steps;
@@ -132,7 +135,9 @@ function parseFrontToBack(part: string, rules: FieldRules): number | string {
   const off = VERT_OFF.exec(part);
   if (!off) return `"${part}" is not a front-to-back position (e.g. "4 steps in front of the front hash")`;
   const sign = off[2].startsWith("behind") || off[2].includes("back") ? 1 : -1;
-  return frontBackY(off[3], off[4], rules) + sign * parseNumber(off[1]) * STEP_M;
+  const n = parseSteps(off[1]);
+  if (typeof n === "string") return n;
+  return frontBackY(off[3], off[4], rules) + sign * n * STEP_M;
 }
 
 /** Reads a position written as describePosition writes it (and common shorthands: S1, FH, BSL, yd ln). */

@@ -27,6 +27,9 @@ export const normaliseColumn = (name: string) =>
     .trim()
     .replace(/[\s\-]+/g, "_");
 
+/** What the importers say about a header naming one column twice (after normalising: "Yard line" = "yard_line"). */
+export const duplicateColumnReason = (column: string) => `The header names the column "${column}" twice; keep one of them and upload the file again.`;
+
 /** Our CSV exports put a ' before cells that a spreadsheet would run as a formula; reading drops it again. */
 const unescapeFormula = (cell: string) => (/^'[=+\-@\t\r]/.test(cell) ? cell.slice(1) : cell);
 
@@ -69,6 +72,9 @@ export function readCsvTable(input: string): CsvTable {
   const [head, ...body] = nonEmpty;
   if (!head) return { columns: [], records: [], errors: [{ line: 1, reason: "The file is empty: it needs a header row and at least one row." }] };
   const columns = head.data.map(normaliseColumn);
+  // Two columns of one name would let the later silently overwrite the earlier in every row.
+  const twice = columns.find((c, i) => c && columns.indexOf(c) !== i);
+  if (twice) return { columns: [], records: [], errors: [{ line: lineAt(starts, head.offset), reason: duplicateColumnReason(twice) }] };
   const records = body.map((r) => {
     const cells: Record<string, string> = {};
     columns.forEach((c, i) => {

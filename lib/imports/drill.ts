@@ -95,6 +95,8 @@ function positionOf(c: Record<string, string>, rules: FieldRules): { x: number; 
     if (!read.ok) return read.error;
     ({ x, y } = read);
   }
+  // NaN passes every comparison below as false: refuse it (and ±Infinity) first.
+  if (!Number.isFinite(x) || !Number.isFinite(y)) return "the position is not a finite number of metres";
   if (Math.abs(x) > HALF_LENGTH_M + FIELD_MARGIN_M) return "the position is more than 10 m beyond an end line";
   if (y < -FIELD_MARGIN_M || y > WIDTH_M + FIELD_MARGIN_M) return "the position is more than 10 m beyond a sideline";
   return { x, y };

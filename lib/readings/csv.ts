@@ -1,6 +1,7 @@
 // Box readings from a CSV file: one reading a row, sets by number and listening points by name.
 // Pure: the upload route previews the rows, then stores them all in one transaction on confirm.
 import Papa from "papaparse";
+import { duplicateColumnReason } from "@/lib/imports/csv-table";
 import { readingSchema, type ReadingBody } from "@/lib/validation/readings";
 
 export interface CsvContext {
@@ -30,6 +31,9 @@ function parseSections(cell: string | undefined): unknown {
 export function parseReadingsCsv(text: string, ctx: CsvContext): { rows: CsvRow[]; headerErrors: string[] } {
   const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ""), { header: true, skipEmptyLines: "greedy", transformHeader: (h) => h.trim() });
   const fields = parsed.meta.fields ?? [];
+  // papaparse renames a repeated header ("note" → "note_1"): refuse it rather than read one of the two.
+  const twice = Object.values(parsed.meta.renamedHeaders ?? {})[0];
+  if (twice) return { rows: [], headerErrors: [duplicateColumnReason(twice)] };
   const missing = ["set", "point", "takenAt", "temperatureC", "humidityPct", "sections", "measuredDb"].filter((c) => !fields.includes(c));
   if (missing.length) return { rows: [], headerErrors: [`Missing column${missing.length > 1 ? "s" : ""}: ${missing.join(", ")}.`] };
   const setByNumber = new Map(ctx.sets.map((s) => [s.number.toLowerCase(), s.id]));

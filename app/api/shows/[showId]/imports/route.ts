@@ -24,12 +24,13 @@ export const POST = route<{ showId: string }>(async (req, { showId }) => {
   const upload = await readUpload(req, MAX_UPLOAD_BYTES);
   const kind = KINDS[upload.fields.kind ?? ""];
   if (!kind) throw badRequest("Say what the file holds: kind must be roster or drill.", { kind: ["Choose roster or drill."] });
-  const planned = await planUpload(show, kind, upload.bytes);
+  // The preview is made before the file is kept, so a file that cannot be previewed leaves nothing behind.
+  const preview = previewOf(await planUpload(show, kind, upload.bytes), show);
   const stored = await storeUpload({ programId: show.programId, showId, kind, fileName: upload.fileName, content: upload.bytes, uploadedBy: user.id });
   return NextResponse.json(
     {
       upload: { id: stored.id, kind, fileName: upload.fileName, sizeBytes: upload.bytes.byteLength, uploadedAt: stored.uploadedAt, uploadedBy: user.name, confirmedAt: null },
-      preview: previewOf(planned, show),
+      preview,
     },
     { status: 201 },
   );
