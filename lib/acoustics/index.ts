@@ -29,3 +29,4 @@ export { planBalance, solveBalancePlan, applyPlan, type PlanEntryDetail, type Ba
 export { DEFAULT_TARGETS, resolveTargets, TARGET_RANGES, type BalanceTargets } from "./targets";
 export { loudnessIso532_1, soneToPhon, phonToSone, type Loudness, type SoundField } from "./loudness";
 export { THIRD_OCTAVE_COUNT, THIRD_OCTAVE_NOMINAL_HZ } from "./loudness-tables";
+export { thirdOctavesFromOctaves, thirdOctavesFromOctavesInto } from "./third-octaves";
