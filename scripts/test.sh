@@ -17,6 +17,10 @@ FAKE_SMTP_WATCH_PID=$$ npx tsx scripts/fake-smtp.ts >"$ROOT/.tmp/fake-smtp.log" 
 stack_up test
 
 status=0
+# A whole run starts with the linter (warnings count); a run of chosen files or projects skips it.
+if [ $# -eq 0 ]; then
+  npm run --silent lint || { status=1; log "lint found problems (above); npm run lint shows them again"; }
+fi
 rm -f "$ROOT/.tmp/vitest.json"
 npx vitest run --reporter=default --reporter=json --outputFile.json="$ROOT/.tmp/vitest.json" "$@" || status=$?
 node scripts/lib/summary.mjs "$ROOT/.tmp/vitest.json" || status=1

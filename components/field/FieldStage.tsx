@@ -68,7 +68,10 @@ export default function FieldStage(props: FieldStageProps) {
   const gesture = useRef<Gesture | null>(null);
   const frame = useRef<number | null>(null);
   const latest = useRef(props);
-  latest.current = props;
+  // The latest props, for gesture handlers attached once.
+  useEffect(() => {
+    latest.current = props;
+  });
 
   const bounds = useMemo(() => fieldBounds(props.listeningPoints), [props.listeningPoints]);
   const fit = useCallback(() => setView(null), []);
@@ -76,15 +79,18 @@ export default function FieldStage(props: FieldStageProps) {
   useEffect(() => {
     const el = box.current;
     if (!el) return;
+    let measured = { width: 0, height: 0 };
     const ro = new ResizeObserver(([entry]) => {
       const w = Math.max(200, Math.floor(entry.contentRect.width));
       const h = Math.max(200, Math.floor(entry.contentRect.height));
-      setSize((s) => (s.width === w && s.height === h ? s : { width: w, height: h }));
+      if (w === measured.width && h === measured.height) return;
+      measured = { width: w, height: h };
+      setSize(measured);
+      setView(null); // a new window size fits the field again
     });
     ro.observe(el);
     return () => ro.disconnect();
   }, []);
-  useEffect(() => setView(null), [size]);
 
   const fitted = useMemo(() => fitView(size.width, size.height, bounds), [size, bounds]);
   const v = view ?? fitted;

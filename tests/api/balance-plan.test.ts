@@ -1,6 +1,6 @@
 // Proposing and adopting a phrase's balance plan, against a private copy of the demo in real PostgreSQL
 // (other suites move the demo's performers); the role checks run on the demo itself.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { DEMO, demoIds, signedIn, type Client } from "../support/api";
 import { copyDemoShow } from "../support/show-copy";
 

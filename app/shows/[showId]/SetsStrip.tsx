@@ -7,8 +7,7 @@ import { plural } from "@/components/format";
 export function SetsStrip({ showId, sets }: { showId: string; sets: SetSummary[] }) {
   if (sets.length === 0) return <EmptyState title="No sets yet">The drill designer adds sets in the field editor.</EmptyState>;
   // The count at which each set is reached, from the start of the show.
-  let running = 0;
-  const rows = sets.map((s) => ({ ...s, at: (running += s.counts) }));
+  const rows = sets.reduce<(SetSummary & { at: number })[]>((acc, s) => [...acc, { ...s, at: (acc.at(-1)?.at ?? 0) + s.counts }], []);
   return (
     <div>
       <ol className="mb-3 grid grid-cols-[repeat(auto-fill,minmax(6.25rem,1fr))] gap-3" aria-label="Sets in order">
@@ -30,7 +29,7 @@ export function SetsStrip({ showId, sets }: { showId: string; sets: SetSummary[]
         ))}
       </ol>
       <p className="text-sm text-ink-soft">
-        {plural(sets.length, "set")}, {plural(running, "count")} in all. Counts are from the previous set. Open a set to place performers and hear its box mix.
+        {plural(sets.length, "set")}, {plural(rows.at(-1)?.at ?? 0, "count")} in all. Counts are from the previous set. Open a set to place performers and hear its box mix.
       </p>
     </div>
   );

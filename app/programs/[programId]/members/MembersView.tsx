@@ -28,6 +28,8 @@ export function MembersView({ programId }: { programId: string }) {
   const isDirector = members.data?.role === "director";
   const invitations = useApi<{ invitations: Invitation[] }>(isDirector ? `/api/programs/${programId}/invitations` : null);
   const [message, setMessage] = useState<{ tone: "info" | "bad"; text: string } | null>(null);
+  // Read once when the page opens: whether an invitation has lapsed need not tick while the page is open.
+  const [now] = useState(Date.now);
 
   async function act(run: () => Promise<unknown>, done: string) {
     setMessage(null);
@@ -110,7 +112,7 @@ export function MembersView({ programId }: { programId: string }) {
               ) : (
                 <ul className="space-y-3">
                   {invitations.data.invitations.map((i) => {
-                    const expired = new Date(i.expiresAt).getTime() < Date.now();
+                    const expired = new Date(i.expiresAt).getTime() < now;
                     return (
                       <li key={i.id} className="rounded-lg border border-ink/15 p-3">
                         <p className="font-semibold text-ink">{i.email}</p>

@@ -14,7 +14,7 @@ import { apiKeys, useApi } from "@/components/use-api";
 import { ShowNav } from "@/components/ShowNav";
 import { HearingCautions } from "./HearingCautions";
 import { HearingField } from "./HearingField";
-import { LEVEL_STEPS, levelStep, type HearingPerformer, type HearingResponse } from "./hearing-types";
+import { LEVEL_STEPS, type HearingPerformer, type HearingResponse } from "./hearing-types";
 
 const TOP = 15;
 const SELECT = "mt-1 block min-h-12 w-full rounded-lg border border-ink/30 bg-paper-raised px-3 text-lg text-ink";

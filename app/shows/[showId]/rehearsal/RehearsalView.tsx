@@ -71,6 +71,8 @@ export function RehearsalView({ showId, initial }: { showId: string; initial: { 
   }
   // A link from the e-mail carries the choice: build the plan at once.
   useEffect(() => {
+    // Building fetches the plan (the outside system) and shows its progress at once.
+    // eslint-disable-next-line react-hooks/set-state-in-effect
     if (options.data && (initial.phraseIds.length || initial.setIds.length) && !plan) void build();
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [options.data]);
@@ -177,7 +179,7 @@ function PlanSheets({ plan, showName }: { plan: Plan; showName: string }) {
             Sets {it.sets.join(", ")} · balance score {it.severity.toFixed(1)} (higher is worse)
           </p>
           <p className="mt-2 rounded-lg bg-paper-sunk p-2 text-sm">
-            Listen from the <strong>{plan.listenFrom.name}</strong>: {plan.listenFrom.words}. Levels are predictions, not measurements; musicians near loud sections should wear hearing protection, and your school's and venue's rules come first.
+            Listen from the <strong>{plan.listenFrom.name}</strong>: {plan.listenFrom.words}. Levels are predictions, not measurements; musicians near loud sections should wear hearing protection, and your school&apos;s and venue&apos;s rules come first.
           </p>
           <div className="mt-4 grid gap-6 md:grid-cols-2 print:grid-cols-[5fr_6fr] print:gap-4">
             <div>
@@ -229,7 +231,7 @@ function PlanSheets({ plan, showName }: { plan: Plan; showName: string }) {
                   ))}
                 </tbody>
               </table>
-              {it.unmet.length ? <p className="mt-2 text-sm text-signal-bad">Not reachable within the instruments' ranges: {it.unmet.join(" ")}</p> : null}
+              {it.unmet.length ? <p className="mt-2 text-sm text-signal-bad">Not reachable within the instruments&apos; ranges: {it.unmet.join(" ")}</p> : null}
             </div>
           </div>
         </section>

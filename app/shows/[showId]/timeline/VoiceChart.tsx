@@ -26,7 +26,7 @@ export function VoiceChart({ samples, sets, failingCheck, onPick, height = 360 }
         <LineChart
           data={data}
           margin={{ top: 16, right: 16, bottom: 8, left: 0 }}
-          onClick={(e: any) => {
+          onClick={(e: { activeTooltipIndex?: number | string | null } | null) => {
             const i = typeof e?.activeTooltipIndex === "number" ? e.activeTooltipIndex : Number(e?.activeTooltipIndex);
             if (onPick && Number.isFinite(i) && data[i]) onPick(data[i]!.sample);
           }}
@@ -36,8 +36,8 @@ export function VoiceChart({ samples, sets, failingCheck, onPick, height = 360 }
           <YAxis unit=" dBA" width={72} domain={["auto", "auto"]} />
           {runs.map((r) => <ReferenceArea key={`${r.x1}-${r.x2}`} x1={r.x1} x2={r.x2} fill="#a3242b" fillOpacity={0.12} />)}
           {sets.map((s) => <ReferenceLine key={s.setId} x={s.showCount} stroke="#8a94a3" strokeDasharray="2 4" label={{ value: s.number, position: "top", fontSize: 11, fill: "#4a5566" }} />)}
-          <Tooltip formatter={(v: any, name: any) => [typeof v === "number" ? `${v.toFixed(1)} dBA` : "—", VOICE_LABELS[String(name)] ?? name]} labelFormatter={(x: any) => `Count ${x}`} />
-          <Legend formatter={(v: any) => VOICE_LABELS[String(v)] ?? v} />
+          <Tooltip formatter={(v, name) => [typeof v === "number" ? `${v.toFixed(1)} dBA` : "—", VOICE_LABELS[String(name)] ?? name]} labelFormatter={(x) => `Count ${x}`} />
+          <Legend formatter={(v) => VOICE_LABELS[String(v)] ?? v} />
           {present.map((v) => <Line key={v} type="monotone" dataKey={v} stroke={VOICE_COLORS[v]} strokeWidth={v === "melody" ? 3 : 2} dot={false} connectNulls={false} isAnimationActive={false} />)}
         </LineChart>
       </ResponsiveContainer>

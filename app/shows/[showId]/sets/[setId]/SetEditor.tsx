@@ -108,6 +108,8 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
     if (!saver.server) {
       const l = layoutOf(d.positions);
       saver.adopt(l, d.set.version);
+      // The server's set arrives through SWR: taking it into the editable history is this effect's job.
+      // eslint-disable-next-line react-hooks/set-state-in-effect
       setHistory(historyOf(l));
     } else if (d.set.version > saver.server.version && !saver.dirty && !saver.busy() && !saver.conflict) {
       const l = layoutOf(d.positions);
@@ -142,20 +144,8 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
   const loudest = useMemo(() => Math.max(-Infinity, ...Object.values(perPerformer).filter(Number.isFinite)), [perPerformer]);
   const relDb = useMemo(() => Object.fromEntries(Object.entries(perPerformer).map(([id, db]) => [id, db - loudest])), [perPerformer, loudest]);
 
-  useEffect(() => {
-    window.__farfieldEditor = {
-      version: () => version,
-      layout: () => layout,
-      previewMix: () => (preview ? preview.mixFor(layout) : null),
-      storedMix: () => analysis.data ?? null,
-      selected: () => selected,
-      flagged: () => [...flagged],
-      shownCount: () => shownCount,
-      frameTimes: frameTimes.current,
-    };
-  });
 
-  const performers = show.data?.performers ?? [];
+  const performers = useMemo(() => show.data?.performers ?? [], [show.data]);
   const byId = useMemo(() => new Map(performers.map((p) => [p.id, p])), [performers]);
   const voiceOf = useMemo(() => new Map((input?.performers ?? []).map((p) => [p.id, p.voice as VoiceOrTacet])), [input]);
   const catalog: InstrumentCatalog = useMemo(() => ({ ...DEFAULT_INSTRUMENTS, ...(input?.instruments ?? {}) }), [input]);
@@ -188,6 +178,18 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
   // The chosen check's players, from the latest stored analysis (it follows saves: a fixed check marks no one).
   const chosen = analysis.data?.checks.find((c) => c.id === chosenCheck && !c.passed) ?? null;
   const flagged = useMemo(() => new Set(chosen?.performerIds ?? []), [chosen]);
+  useEffect(() => {
+    window.__farfieldEditor = {
+      version: () => version,
+      layout: () => layout,
+      previewMix: () => (preview ? preview.mixFor(layout) : null),
+      storedMix: () => analysis.data ?? null,
+      selected: () => selected,
+      flagged: () => [...flagged],
+      shownCount: () => shownCount,
+      frameTimes: frameTimes.current,
+    };
+  });
   const chooseCheck = (id: string | null) => {
     setChosenCheck(id);
     const ids = analysis.data?.checks.find((c) => c.id === id)?.performerIds ?? [];

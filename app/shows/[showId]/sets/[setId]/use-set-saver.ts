@@ -24,7 +24,10 @@ export function useSetSaver(args: { showId: string; setId: string; present: Layo
   const [conflict, setConflict] = useState<Conflict | null>(null);
   const inFlight = useRef(false);
   const callbacks = useRef(args);
-  callbacks.current = args;
+  // The latest callbacks, for a save that ends after a later render.
+  useEffect(() => {
+    callbacks.current = args;
+  });
 
   const send = useCallback(
     async (base: { layout: Layout; version: number }, target: Layout) => {
@@ -67,6 +70,8 @@ export function useSetSaver(args: { showId: string; setId: string; present: Layo
     if (!enabled || !server || conflict || error || inFlight.current) return;
     const d = diffLayouts(server.layout, present);
     if (d.upserts.length === 0 && d.removals.length === 0) return;
+    // Sending is the effect's job (the server is the outside system); its "saving" status is meant to show at once.
+    // eslint-disable-next-line react-hooks/set-state-in-effect
     void send(server, present);
   }, [enabled, server, conflict, error, present, send]);
 
