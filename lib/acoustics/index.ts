@@ -30,3 +30,14 @@ export { DEFAULT_TARGETS, resolveTargets, TARGET_RANGES, type BalanceTargets } f
 export { loudnessIso532_1, soneToPhon, phonToSone, type Loudness, type SoundField } from "./loudness";
 export { THIRD_OCTAVE_COUNT, THIRD_OCTAVE_NOMINAL_HZ } from "./loudness-tables";
 export { thirdOctavesFromOctaves, thirdOctavesFromOctavesInto } from "./third-octaves";
+export {
+  BACKGROUND_PRESETS,
+  BACKGROUND_PRESET_SPECS,
+  backgroundThirdOctaves,
+  validateBackground,
+  thirdOctavesDbA,
+  type Background,
+  type BackgroundPreset,
+} from "./background";
+export { audibility, maskedThresholdInto, criticalBandLevelsInto, type Audibility } from "./audibility";
+export { pointLoudness, type PointLoudness, type VoiceLoudness } from "./point-loudness";

@@ -18,6 +18,11 @@ export const THIRD_OCTAVE_NOMINAL_HZ: readonly number[] = Object.freeze([
   5000, 6300, 8000, 10000, 12500,
 ]);
 
+/** Exact base-10 centre (Hz) of third-octave i of 25 Hz … 12.5 kHz (IEC 61260-1: 1000·10^((i − 16)/10)). */
+export function thirdOctaveCentreHz(i: number): number {
+  return 1000 * 10 ** ((i - 16) / 10);
+}
+
 /** Table A.3 (RAP): upper ends of the level ranges (dB) for the low-frequency correction. */
 export const LF_RANGE_DB = Float64Array.of(45, 55, 65, 71, 80, 90, 100, 120);
 

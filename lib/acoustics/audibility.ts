@@ -1,0 +1,105 @@
+// Whether a voice is audible at all over a masker (the rest of the band plus the background), per
+// critical band. Method — a masked-threshold rule on the 20 approximated critical bands of
+// ISO 532-1 (the three lowest gathered from their third-octaves, then one third-octave each):
+//  - the masker's level in each band spreads to its neighbours by the slopes of Terhardt (1979) as
+//    used in ITU-R BS.1387-1 (PEAQ): 27 dB per Bark downward, 24 + 230 Hz/f − 0.2·L dB per Bark
+//    upward (flatter for louder maskers); contributions add as energies. (From memory; P. Kabal's
+//    PEAQ implementation PQspreadCB.m shows the same constants.)
+//  - the masked threshold lies below that spread level by the masking index of a noise-like masker,
+//    av = −1.525 − 0.175·z − 0.5 dB (ISO/IEC 11172-3 Annex D, psychoacoustic model 1; the tonal
+//    index −6.025 − 0.275·z of the same model is transcribed in rajmic/declipping2020_codes
+//    Methods/l1_relaxation/masking2.m @ 7170fbfe9149406221163fb576b58e81256f583c; the non-tonal one
+//    from memory). Band music and crowd are dense, so the noise-like index is used.
+//  - nothing is heard below the threshold in quiet, the level at which ISO 532-1 gives a band no
+//    loudness: Table A.6 plus the ear's transmission (Table A.4), free field.
+// A voice is heard when, in at least one critical band, its level exceeds both thresholds; its
+// margin is the largest excess (dB). Simultaneous masking only: the rule knows nothing of rhythm,
+// onsets or where players stand, which help a listener pick a voice out.
+import {
+  CORE_BAND_COUNT,
+  CRITICAL_BAND_UPPER_BARK,
+  EAR_TRANSMISSION_DB,
+  LOW_CRITICAL_BANDS,
+  THRESHOLD_QUIET_DB,
+  thirdOctaveCentreHz as thirdCentreHz,
+} from "./loudness-tables";
+
+const CB = CORE_BAND_COUNT;
+const LN10_10 = Math.LN10 / 10;
+/** Lower spreading slope (dB per Bark), masker above the band. */
+export const LOWER_SLOPE_DB_PER_BARK = 27;
+
+/** Centre (Bark) of each approximated critical band: the middle of its limits. */
+export const CRITICAL_BAND_CENTRE_BARK = Float64Array.from({ length: CB }, (_, i) => ((i === 0 ? 0 : CRITICAL_BAND_UPPER_BARK[i - 1]) + CRITICAL_BAND_UPPER_BARK[i]) / 2);
+
+/** Centre frequency (Hz) of each approximated critical band: its third-octave's, or the geometric middle of a gathered group. */
+const CRITICAL_BAND_CENTRE_HZ = Float64Array.from({ length: CB }, (_, i) =>
+  i < LOW_CRITICAL_BANDS.length ? Math.sqrt(thirdCentreHz(LOW_CRITICAL_BANDS[i][0]) * thirdCentreHz(LOW_CRITICAL_BANDS[i][1] - 1)) : thirdCentreHz(i + 8),
+);
+
+/** Masking index (dB) of a noise-like masker at a critical-band rate (ISO/IEC 11172-3 Annex D). */
+export function maskingIndexDb(bark: number): number {
+  return -1.525 - 0.175 * bark - 0.5;
+}
+
+/** Threshold in quiet (dB, third-octave or gathered band level) per approximated critical band. */
+export const QUIET_THRESHOLD_DB = Float64Array.from({ length: CB }, (_, i) => THRESHOLD_QUIET_DB[i] + EAR_TRANSMISSION_DB[i]);
+
+/** Writes the level (dB) of each of the 20 approximated critical bands of 28 third-octave levels into `out`. */
+export function criticalBandLevelsInto(thirdOctaveDb: ArrayLike<number>, out: Float64Array): void {
+  for (let i = 0; i < CB; i++) {
+    if (i < LOW_CRITICAL_BANDS.length) {
+      let e = 0;
+      for (let t = LOW_CRITICAL_BANDS[i][0]; t < LOW_CRITICAL_BANDS[i][1]; t++) e += Math.exp(thirdOctaveDb[t] * LN10_10);
+      out[i] = 10 * Math.log10(e);
+    } else out[i] = thirdOctaveDb[i + 8];
+  }
+}
+
+/** Writes the masked threshold (dB) in each critical band of a masker given by its critical-band levels into `out`. */
+export function maskedThresholdInto(maskerCbDb: ArrayLike<number>, out: Float64Array): void {
+  for (let i = 0; i < CB; i++) {
+    let e = 0;
+    for (let j = 0; j < CB; j++) {
+      const l = maskerCbDb[j];
+      if (!(l > -Infinity)) continue;
+      const dz = CRITICAL_BAND_CENTRE_BARK[i] - CRITICAL_BAND_CENTRE_BARK[j];
+      let spread: number;
+      if (dz < 0) spread = LOWER_SLOPE_DB_PER_BARK * dz;
+      else {
+        const upper = 24 + 230 / CRITICAL_BAND_CENTRE_HZ[j] - 0.2 * l;
+        spread = -(upper > 0 ? upper : 0) * dz;
+      }
+      e += Math.exp((l + spread) * LN10_10);
+    }
+    out[i] = 10 * Math.log10(e) + maskingIndexDb(CRITICAL_BAND_CENTRE_BARK[i]);
+  }
+}
+
+export interface Audibility {
+  heard: boolean;
+  /** Largest excess (dB) of the voice over the masked threshold and the threshold in quiet, over the critical bands; −Infinity for silence. */
+  marginDb: number;
+  /** Index (0–19) of the approximated critical band where the margin is largest, −1 for silence. */
+  band: number;
+}
+
+/**
+ * Is a voice (its critical-band levels) audible over a masker's masked threshold (maskedThresholdInto)?
+ * Heard when its level exceeds the masked threshold and the threshold in quiet in at least one band.
+ */
+export function audibility(voiceCbDb: ArrayLike<number>, maskedThresholdDb: ArrayLike<number>): Audibility {
+  let marginDb = -Infinity;
+  let band = -1;
+  for (let i = 0; i < CB; i++) {
+    const l = voiceCbDb[i];
+    if (!(l > -Infinity)) continue;
+    const masked = maskedThresholdDb[i];
+    const threshold = masked > QUIET_THRESHOLD_DB[i] ? masked : QUIET_THRESHOLD_DB[i];
+    if (l - threshold > marginDb) {
+      marginDb = l - threshold;
+      band = i;
+    }
+  }
+  return { heard: marginDb > 0, marginDb, band };
+}
