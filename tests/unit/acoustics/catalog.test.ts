@@ -9,6 +9,7 @@ import {
   shiftDynamic,
   sumLevelsDb,
 } from "@/lib/acoustics";
+import { handSource } from "./helpers";
 
 const KEYS = [
   "flute", "piccolo", "clarinet", "bass-clarinet", "alto-sax", "tenor-sax", "bari-sax", "trumpet", "mellophone",
@@ -62,11 +63,14 @@ describe("default instrument catalog", () => {
     }
   });
 
-  it("puts woodwinds at 60–70 dB Lw at pp and 95–105 at ff, brass ff at 110–120 (from memory, not checked)", () => {
+  it("puts woodwinds at 60–70 dB Lw at pp (piccolo and saxophones held at 72) and 95–105 at ff, brass ff at 109–120 (from memory, not checked)", () => {
+    // The from-memory range is 60–70 at pp. The piccolo and the saxophones sit at 72 so their
+    // pp–ff span stays inside 10–30 dB with ff at 100–101; named here rather than hidden in a bound.
+    const ABOVE_70_AT_PP = new Set(["piccolo", "alto-sax", "tenor-sax", "bari-sax"]);
     for (const [k, s] of entries) {
       if (s.family === "woodwind") {
         expect(s.powerDb.pp, k).toBeGreaterThanOrEqual(60);
-        expect(s.powerDb.pp, k).toBeLessThanOrEqual(72); // piccolo a little above
+        expect(s.powerDb.pp, k).toBeLessThanOrEqual(ABOVE_70_AT_PP.has(k) ? 72 : 70);
         expect(s.powerDb.ff, k).toBeGreaterThanOrEqual(95);
         expect(s.powerDb.ff, k).toBeLessThanOrEqual(105);
       }
@@ -91,7 +95,19 @@ describe("default instrument catalog", () => {
   it("brightens with dynamic: the 4 kHz band gains more than the 125 Hz band from p to ff for brass", () => {
     const t = DEFAULT_INSTRUMENTS.trumpet;
     expect(dynamicChangeDb(t, "p", "ff", 6)).toBeGreaterThan(dynamicChangeDb(t, "p", "ff", 1));
-    expect(dynamicChangeDb(t, "p", "ff")).toBeCloseTo(t.powerDb.ff - t.powerDb.p, 12);
+  });
+
+  it("changes level from p to ff by hand-calculated amounts (flat spectrum, +1 dB per step at 4 kHz only)", () => {
+    // Hand calculation: p = 80, ff = 100 dB overall, four steps apart. At ff the 4 kHz band is +2 dB
+    // over the other seven, at p −2 dB; each spectrum is normalised to its overall level, so
+    // 4 kHz changes by 4 + 20 − 10·lg((7 + 10^0.2)/(7 + 10^−0.2)) = 23.488441 dB and every other
+    // band by 19.488441 dB.
+    const spec = { ...handSource([80, 80, 80, 80, 80, 80, 80, 80], 5), brightnessDbPerStep: [0, 0, 0, 0, 0, 0, 1, 0] };
+    spec.powerDb = { ...spec.powerDb, p: 80, ff: 100 };
+    expect(dynamicChangeDb(spec, "p", "ff")).toBeCloseTo(20, 9);
+    expect(dynamicChangeDb(spec, "ff", "p")).toBeCloseTo(-20, 9);
+    expect(dynamicChangeDb(spec, "p", "ff", 6)).toBeCloseTo(23.488441, 5);
+    for (const b of [0, 1, 2, 3, 4, 5, 7]) expect(dynamicChangeDb(spec, "p", "ff", b)).toBeCloseTo(19.488441, 5);
   });
 
   it("steps dynamics within pp…fff", () => {

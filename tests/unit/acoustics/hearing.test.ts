@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { analyzeSet, hearingMap, type AnalysisInput, type PerformerInput } from "@/lib/acoustics";
-import { AIR, performer } from "./helpers";
+import { hearingMap, type AnalysisInput, type PerformerInput } from "@/lib/acoustics";
+import { AIR, handSource, performer } from "./helpers";
 
 const drum = (over: Partial<PerformerInput> = {}): PerformerInput =>
   performer({ id: "BD", instrument: "bass-drum", section: "bass drums", voice: "percussion", dynamic: "ff", x: 0, y: 20, facingDeg: 0, ...over });
@@ -26,11 +26,17 @@ describe("hearing map: levels at the ears", () => {
     expect(Math.abs(drop - 20 * Math.log10(r2 / r1))).toBeLessThan(1.5);
   });
 
-  it("agrees with the box mix engine: the level at a performer's ears is the mix at a point at ear height there", () => {
-    const input = set([drum(), listener("T1", 3), drum({ id: "BD2", x: -4, y: 25, dynamic: "f" })]);
-    const direct = analyzeSet({ ...input, listeningPoints: [{ id: "ears", x: 3, y: 20, z: 1.6 }] }).points[0]!;
+  it("matches a hand calculation: 1 kHz sources 2 m and 4 m from the ears sum to 94.967 dBA (ISO 9613-2 eq. 7, ISO 9613-1 Table 1)", () => {
+    // Two sources with all their power in the 1 kHz band, Lw 111.03 dB, at ear height 1.6 m,
+    // 2 m and 4 m from T1. Each: Lw − (20·lg r + 11) − α·r with α(1 kHz, 20 °C, 50 %) = 4.66 dB/km
+    // (ISO 9613-1 Table 1, via jmrplens/phonometry), A-weighting 0 dB at 1 kHz (IEC 61672-1
+    // Table 3): 94.000080 and 87.970160 dB; energetic sum 94.967318 dBA (python by hand).
+    const tone = handSource([-20, -20, -20, -20, 111.03, -20, -20, -20]);
+    const src = (id: string, x: number) => performer({ id, instrument: "tone", section: "tones", voice: "melody", x, y: 20, z: 1.6 });
+    const input: AnalysisInput = { ...set([src("S1", -2), listener("T1", 0), src("S2", 4)]), instruments: { tone } };
     const t1 = byId(hearingMap(input, { rehearsalMinutes: 60 }), "T1");
-    expect(t1.dbA).toBeCloseTo(direct.totalDbA, 9); // T1 is tacet, so everyone else is the whole mix
+    expect(t1.dbA).toBeCloseTo(94.967318, 2);
+    expect(t1.loudestSourceId).toBe("S1");
   });
 
   it("does not count the player's own instrument, and counts a neighbour a step away as 1 m, never infinite", () => {
@@ -51,30 +57,35 @@ describe("hearing map: levels at the ears", () => {
 });
 
 describe("hearing map: dose of a rehearsal", () => {
-  // Tune the drum's strength so T1 hears exactly a target level; a single source moves dB for dB.
-  function atLevel(target: number, minutes: number) {
-    const base = byId(hearingMap(set([drum(), listener("T1", 6)]), { rehearsalMinutes: minutes }), "T1").dbA;
-    const map = hearingMap(set([drum({ strengthDb: target - base }), listener("T1", 6)]), { rehearsalMinutes: minutes });
+  // A source with all its power in the 1 kHz band, 2 m from T1's ears at the same height: the
+  // level there is Lw − 17.0206 − 0.0093 dB (ISO 9613-2 eq. 7; α = 4.66 dB/km at 1 kHz, 20 °C, 50 %,
+  // ISO 9613-1 Table 1) with no A-weighting at 1 kHz, so Lw 111.03 gives 94.0001 dBA, 117.03 gives
+  // 100.0001, 112.03 gives 95.0001 and 109.03 gives 92.0001 (hand calculation).
+  function atLevel(lwDb: number, minutes: number) {
+    const tone = handSource([-20, -20, -20, -20, lwDb, -20, -20, -20]);
+    const src = performer({ id: "S", instrument: "tone", section: "tones", voice: "melody", x: -2, y: 20, z: 1.6 });
+    const map = hearingMap({ ...set([src, listener("T1", 0)]), instruments: { tone } }, { rehearsalMinutes: minutes });
     return byId(map, "T1");
   }
 
   it("NIOSH 98-126 (85 dBA, 8 h, 3 dB exchange): 94 dBA for 1 h is a full daily dose; 100 dBA allows 15 min (from memory of the published table)", () => {
-    const t = atLevel(94, 60);
-    expect(t.dbA).toBeCloseTo(94, 9);
-    expect(t.exposure.niosh.dose).toBeCloseTo(1, 9);
-    expect(t.exposure.niosh.limitMinutes).toBeCloseTo(60, 9);
-    expect(atLevel(100, 60).exposure.niosh.limitMinutes).toBeCloseTo(15, 9);
+    const t = atLevel(111.03, 60);
+    expect(t.dbA).toBeCloseTo(94, 2);
+    expect(t.exposure.niosh.dose).toBeCloseTo(1, 2);
+    expect(t.exposure.niosh.limitMinutes).toBeCloseTo(60, 0);
+    expect(atLevel(117.03, 60).exposure.niosh.limitMinutes).toBeCloseTo(15, 1);
   });
 
   it("OSHA 29 CFR 1910.95 Table G-16 (90 dBA, 8 h, 5 dB exchange): 100 dBA for 2 h is a full dose, 95 dBA allows 4 h (from memory)", () => {
-    const t = atLevel(100, 120);
-    expect(t.exposure.osha.dose).toBeCloseTo(1, 9);
-    expect(t.exposure.niosh.dose).toBeCloseTo(8, 9); // 120 min against NIOSH's 15
-    expect(atLevel(95, 60).exposure.osha.limitMinutes).toBeCloseTo(240, 9);
+    const t = atLevel(117.03, 120);
+    expect(t.dbA).toBeCloseTo(100, 2);
+    expect(t.exposure.osha.dose).toBeCloseTo(1, 2);
+    expect(t.exposure.niosh.dose).toBeCloseTo(8, 1); // 120 min against NIOSH's 15
+    expect(atLevel(112.03, 60).exposure.osha.limitMinutes).toBeCloseTo(240, 0);
   });
 
   it("scales the dose with the rehearsal's length", () => {
-    expect(atLevel(97, 90).exposure.niosh.dose).toBeCloseTo(3 * atLevel(97, 30).exposure.niosh.dose, 9);
+    expect(atLevel(109.03, 90).exposure.niosh.dose).toBeCloseTo(3 * atLevel(109.03, 30).exposure.niosh.dose, 9);
   });
 
   it("rejects bad options with the field named", () => {

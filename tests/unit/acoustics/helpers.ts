@@ -1,5 +1,5 @@
 // Shared builders for the acoustics tests.
-import type { Conditions, Dynamic, PerformerInput, VoiceOrTacet } from "@/lib/acoustics";
+import type { Conditions, Dynamic, InstrumentSpec, PerformerInput, VoiceOrTacet } from "@/lib/acoustics";
 
 /** The demo press box: on the 50, 25 m behind the front sideline, 18 m up. */
 export const BOX = { id: "box", x: 0, y: -25, z: 18 };
@@ -23,5 +23,26 @@ export function performer(over: Partial<PerformerInput> & { id: string }): Perfo
     y: 10,
     facingDeg: 0,
     ...over,
+  };
+}
+
+/**
+ * A test source with a spectrum chosen by hand: band levels `bandLwDb` (dB re 1 pW) at mf, no
+ * directivity, no carry offset, and every other dynamic `stepDb` per step away from mf. Lets a
+ * test predict a level with pencil and paper, independent of the catalog.
+ */
+export function handSource(bandLwDb: readonly number[], stepDb = 6): InstrumentSpec {
+  const mf = 10 * Math.log10(bandLwDb.reduce((s, l) => s + 10 ** (l / 10), 0));
+  const at = (steps: number) => mf + steps * stepDb;
+  return {
+    name: "hand source",
+    family: "brass",
+    register: "tenor",
+    powerDb: { pp: at(-3), p: at(-2), mp: at(-1), mf: at(0), f: at(1), ff: at(2), fff: at(3) },
+    spectrumDb: bandLwDb.map((l) => l - mf),
+    brightnessDbPerStep: [0, 0, 0, 0, 0, 0, 0, 0],
+    directivity: { anglesDeg: [0, 180], bandsDb: bandLwDb.map(() => [0, 0]) },
+    carryDb: 0,
+    source: "test",
   };
 }
