@@ -1,6 +1,7 @@
 // Box readings: sound level meter readings at a listening point, recorded by staff, which the
 // calibration fits the instrument catalog to. Catalog history itself is instrument_catalogs.
-import { doublePrecision, index, jsonb, pgEnum, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { sql } from "drizzle-orm";
+import { check, doublePrecision, index, jsonb, pgEnum, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
 import { dynamicEnum, listeningPoints, sets, shows, users } from "./schema";
 
 export const meterWeightingEnum = pgEnum("meter_weighting", ["A", "C"]);
@@ -35,7 +36,14 @@ export const boxReadings = pgTable(
     recordedBy: text("recorded_by").references(() => users.id, { onDelete: "set null" }),
     createdAt: timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
   },
-  (t) => [index("box_readings_show_taken_idx").on(t.showId, t.takenAt)],
+  (t) => [
+    index("box_readings_show_taken_idx").on(t.showId, t.takenAt),
+    // The ranges of lib/validation/readings.ts; they refuse NaN and ±Infinity too (migration 0007).
+    check(
+      "box_readings_in_range",
+      sql`${t.temperatureC} between -20 and 50 and ${t.relativeHumidityPct} between 10 and 100 and ${t.measuredDb} between 30 and 140 and ${t.meterHeightM} between 0 and 100`,
+    ),
+  ],
 );
 export type BoxReadingRow = typeof boxReadings.$inferSelect;
 export type NewBoxReadingRow = typeof boxReadings.$inferInsert;

@@ -1,6 +1,8 @@
 // The whole data model. Row types are exported beside each table.
+import { sql } from "drizzle-orm";
 import {
   bigint,
+  check,
   doublePrecision,
   index,
   integer,
@@ -125,7 +127,15 @@ export const shows = pgTable(
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
-  (t) => [index("shows_program_idx").on(t.programId)],
+  (t) => [
+    index("shows_program_idx").on(t.programId),
+    // The engine's range (lib/acoustics/atmosphere.ts validateAir); NaN sorts above every number in
+    // PostgreSQL, so these ranges refuse NaN and ±Infinity too (migration 0007).
+    check(
+      "shows_conditions_in_range",
+      sql`${t.temperatureC} between -50 and 60 and ${t.relativeHumidityPct} between 0 and 100 and ${t.pressureKPa} > 0 and ${t.pressureKPa} <= 200 and ${t.groundFactor} between 0 and 1`,
+    ),
+  ],
 );
 export type Show = typeof shows.$inferSelect;
 
@@ -142,7 +152,11 @@ export const listeningPoints = pgTable(
     z: doublePrecision("z").notNull(),
     order: integer("order").notNull().default(0),
   },
-  (t) => [index("listening_points_show_idx").on(t.showId)],
+  (t) => [
+    index("listening_points_show_idx").on(t.showId),
+    // Generous: a listening point within a kilometre of the 50, at most 100 m below or 1 km above the field.
+    check("listening_points_in_range", sql`${t.x} between -1000 and 1000 and ${t.y} between -1000 and 1000 and ${t.z} between -100 and 1000`),
+  ],
 );
 export type ListeningPoint = typeof listeningPoints.$inferSelect;
 
@@ -161,7 +175,10 @@ export const performers = pgTable(
     name: text("name"),
     createdAt: createdAt(),
   },
-  (t) => [uniqueIndex("performers_show_label_idx").on(t.showId, t.label)],
+  (t) => [
+    uniqueIndex("performers_show_label_idx").on(t.showId, t.label),
+    check("performers_strength_in_range", sql`${t.strengthDb} between -6 and 6`),
+  ],
 );
 export type Performer = typeof performers.$inferSelect;
 
@@ -215,7 +232,13 @@ export const positions = pgTable(
     y: doublePrecision("y").notNull(),
     facingDeg: doublePrecision("facing_deg").notNull().default(0),
   },
-  (t) => [primaryKey({ columns: [t.setId, t.performerId] }), index("positions_performer_idx").on(t.performerId)],
+  (t) => [
+    primaryKey({ columns: [t.setId, t.performerId] }),
+    index("positions_performer_idx").on(t.performerId),
+    // A little wider than the field area lib/validation/positions.ts allows (64.864 m either side of
+    // the 50, 10 m beyond each sideline), so every position the API takes fits; facing as it normalises it.
+    check("positions_in_field_area", sql`${t.x} between -65 and 65 and ${t.y} between -11 and 60 and ${t.facingDeg} >= 0 and ${t.facingDeg} < 360`),
+  ],
 );
 export type PositionRow = typeof positions.$inferSelect;
 
