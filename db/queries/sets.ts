@@ -1,6 +1,7 @@
 import { and, asc, eq, gt, inArray, or, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
 import { performers, phrases, positions, sets } from "../schema";
+import { finitePosition } from "./finite-positions";
 import { isUniqueViolation } from "./pg-errors";
 
 /** The columns of a set that requests work with (everything but its timestamps). */
@@ -27,7 +28,7 @@ export async function listPositions(setId: string) {
   return db
     .select({ performerId: positions.performerId, x: positions.x, y: positions.y, facingDeg: positions.facingDeg })
     .from(positions)
-    .where(eq(positions.setId, setId))
+    .where(and(eq(positions.setId, setId), finitePosition))
     .orderBy(asc(positions.performerId));
 }
 
@@ -145,7 +146,7 @@ export async function createSet(
       if (args.copyFromSetId) {
         await tx.execute(sql`
           insert into ${positions} (set_id, performer_id, x, y, facing_deg)
-          select ${created!.id}, performer_id, x, y, facing_deg from ${positions} where set_id = ${args.copyFromSetId}`);
+          select ${created!.id}, performer_id, x, y, facing_deg from ${positions} where set_id = ${args.copyFromSetId} and ${finitePosition}`);
       }
       return { ok: true as const, set: created! };
     });

@@ -1,9 +1,10 @@
 // A whole show as one show file (no ids), and a show file written back as a new show in one transaction.
-import { asc, eq, inArray } from "drizzle-orm";
+import { and, asc, eq, inArray } from "drizzle-orm";
 import { SHOW_FILE_FORMAT, SHOW_FILE_VERSION, type ShowFile } from "@/lib/show-file/schema";
 import { db } from "../client";
 import { listeningPoints, movements, performerOverrides, performers, phrases, positions, sets, shows, voiceAssignments } from "../schema";
 import { uploads } from "../schema-team";
+import { finitePosition } from "./finite-positions";
 
 const byText = <T>(key: (t: T) => string) => (a: T, b: T) => (key(a) < key(b) ? -1 : key(a) > key(b) ? 1 : 0);
 
@@ -20,7 +21,7 @@ export async function loadShowFile(showId: string): Promise<ShowFile | null> {
   const setIds = setRows.map((s) => s.id);
   const phraseIds = phraseRows.map((p) => p.id);
   const [positionRows, voiceRows, overrideRows] = await Promise.all([
-    setIds.length ? db.select().from(positions).where(inArray(positions.setId, setIds)) : [],
+    setIds.length ? db.select().from(positions).where(and(inArray(positions.setId, setIds), finitePosition)) : [],
     phraseIds.length ? db.select().from(voiceAssignments).where(inArray(voiceAssignments.phraseId, phraseIds)) : [],
     phraseIds.length ? db.select().from(performerOverrides).where(inArray(performerOverrides.phraseId, phraseIds)) : [],
   ]);

@@ -5,6 +5,7 @@ import type { RosterPlan } from "@/lib/imports/roster";
 import { db, type Tx } from "../client";
 import { performers, positions, sets, users } from "../schema";
 import { uploads } from "../schema-team";
+import { finitePosition } from "./finite-positions";
 
 type Kind = (typeof uploads.kind.enumValues)[number];
 
@@ -50,7 +51,7 @@ export async function loadImportContext(showId: string) {
       .select({ setId: positions.setId, performerId: positions.performerId, x: positions.x, y: positions.y, facingDeg: positions.facingDeg })
       .from(positions)
       .innerJoin(sets, eq(sets.id, positions.setId))
-      .where(eq(sets.showId, showId)),
+      .where(and(eq(sets.showId, showId), finitePosition)),
   ]);
   const bySet = new Map(setRows.map((s) => [s.id, new Map<string, { x: number; y: number; facingDeg: number }>()]));
   for (const p of positionRows) bySet.get(p.setId)?.set(p.performerId, { x: p.x, y: p.y, facingDeg: p.facingDeg });
