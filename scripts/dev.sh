@@ -2,6 +2,7 @@
 # npm run dev: like npm start, but the Next.js dev server with reloads (PORT overrides 3000).
 source "$(dirname "$0")/lib/common.sh"
 source "$ROOT/scripts/lib/config.sh"
+source "$ROOT/scripts/lib/mail.sh"
 cd "$ROOT"
 ensure_node_modules
 pg_up "$PG_DIR" "$PG_PORT"
@@ -12,7 +13,8 @@ mkdir -p .tmp
 export TMPDIR="$ROOT/.tmp"
 # Mail goes to the local fake server unless SMTP settings are given (see npm start).
 if [ -z "${SMTP_HOST:-}" ]; then
-  export DEV_MAILBOX=true MAIL_DIR="${MAIL_DIR:-$ROOT/.data/mail}"
-  FAKE_SMTP_WATCH_PID=$$ npx tsx scripts/fake-smtp.ts &
+  start_fake_smtp "${MAIL_DIR:-$ROOT/.data/mail}"
+else
+  unset DEV_MAILBOX
 fi
 exec npx next dev -H 127.0.0.1 -p "$PORT"

@@ -1,9 +1,12 @@
 // A local stand-in for a hosted SMTP service: accepts every message on loopback and keeps it as
 // an .eml file plus one line of index.jsonl (read by the development mailbox page and the tests).
-// `npx tsx scripts/fake-smtp.ts` listens on SMTP_PORT and writes into MAIL_DIR (lib/env.ts);
-// FAKE_SMTP_WATCH_PID makes it exit when that process (the script that started it) is gone.
+// `npx tsx scripts/fake-smtp.ts` listens on SMTP_PORT (0: a free port the system picks) and writes
+// into MAIL_DIR (lib/env.ts). The start scripts use start_fake_smtp (scripts/lib/mail.sh), which sets:
+// FAKE_SMTP_PORT_FILE, where the port is written once the server listens; FAKE_SMTP_EXIT_ON_EOF=1, to
+// exit when stdin (a pipe the starting script holds) closes; FAKE_SMTP_WATCH_PID, to exit when that
+// process is gone.
 import { randomUUID } from "node:crypto";
-import { appendFile, mkdir, writeFile } from "node:fs/promises";
+import { appendFile, mkdir, rename, writeFile } from "node:fs/promises";
 import path from "node:path";
 import { simpleParser, type AddressObject } from "mailparser";
 import { SMTPServer } from "smtp-server";
@@ -68,18 +71,38 @@ export async function startFakeSmtp(opts: { port: number; dir: string; onMessage
   return { port, close: () => new Promise<void>((resolve) => server.close(() => resolve())) };
 }
 
+/** The links in a message's text, for the console of whoever runs the server locally. */
+const linksIn = (text: string) => text.match(/https?:\/\/\S+/g) ?? [];
+
 async function main() {
   const { env } = await import("@/lib/env");
   const dir = path.resolve(env.MAIL_DIR);
   const smtp = await startFakeSmtp({
     port: env.SMTP_PORT,
     dir,
-    onMessage: (m) => console.log(`[fake-smtp] kept "${m.subject}" for ${m.to.join(", ")}`),
+    onMessage: (m) => console.log([`[fake-smtp] kept "${m.subject}" for ${m.to.join(", ")}`, ...linksIn(m.text).map((l) => `  ${l}`)].join("\n")),
+  }).catch((err: NodeJS.ErrnoException) => {
+    if (err.code === "EADDRINUSE") {
+      throw new Error(`port ${env.SMTP_PORT} on 127.0.0.1 is in use (another npm start?). Leave FAKE_SMTP_PORT unset (npm start) or set SMTP_PORT=0 to take a free one.`);
+    }
+    throw err;
   });
   console.log(`[fake-smtp] listening on 127.0.0.1:${smtp.port}, keeping messages in ${path.relative(process.cwd(), dir) || "."}`);
   const stop = () => smtp.close().then(() => process.exit(0));
   process.on("SIGTERM", stop);
   process.on("SIGINT", stop);
+  const portFile = process.env.FAKE_SMTP_PORT_FILE;
+  if (portFile) {
+    // Written whole, then renamed, so the waiting script never reads half a number.
+    await writeFile(`${portFile}.part`, String(smtp.port));
+    await rename(`${portFile}.part`, portFile);
+  }
+  if (process.env.FAKE_SMTP_EXIT_ON_EOF === "1") {
+    // Every holder of the pipe's other end (the script, the app it became) has ended, however it ended.
+    process.stdin.on("end", () => void stop());
+    process.stdin.on("error", () => void stop());
+    process.stdin.resume();
+  }
   const watched = Number(process.env.FAKE_SMTP_WATCH_PID ?? "");
   if (watched > 0) {
     setInterval(() => {

@@ -2,6 +2,7 @@
 # npm start: install what is missing, start PostgreSQL, migrate, load the demo, build, serve.
 source "$(dirname "$0")/lib/common.sh"
 source "$ROOT/scripts/lib/config.sh"
+source "$ROOT/scripts/lib/mail.sh"
 cd "$ROOT"
 
 ensure_node_modules
@@ -10,6 +11,16 @@ create_database "$PG_PORT" farfield
 npx tsx db/migrate.ts
 npx tsx db/demo/load.ts
 ensure_build
+
+# Without SMTP settings of its own, mail goes to a local fake server on a free port, which keeps every
+# message in .data/mail (each signed-in person reads their own at /dev/mail) and ends with the app.
+if [ -z "${SMTP_HOST:-}" ]; then
+  start_fake_smtp "${MAIL_DIR:-$ROOT/.data/mail}"
+  mail_words="Mail stays on this machine: .data/mail, and each person's own at $APP_BASE_URL/dev/mail (local use only)."
+else
+  unset DEV_MAILBOX # real SMTP settings: no local mailbox
+  mail_words="Mail goes out through $SMTP_HOST."
+fi
 
 cat <<MSG
 
@@ -20,12 +31,7 @@ cat <<MSG
     staff     staff@harbor-ridge.example
     director of a second program  director@westbrook.example
   PostgreSQL keeps its data in .data/pg (npm run db:stop stops it).
+  $mail_words
 
 MSG
-# Without SMTP settings of its own, mail goes to the local fake server, which keeps every message in
-# .data/mail (readable by the demo's directors at /dev/mail) and stops when the app does.
-if [ -z "${SMTP_HOST:-}" ]; then
-  export DEV_MAILBOX=true MAIL_DIR="${MAIL_DIR:-$ROOT/.data/mail}"
-  FAKE_SMTP_WATCH_PID=$$ npx tsx scripts/fake-smtp.ts &
-fi
 exec npx next start -H 127.0.0.1 -p "$PORT"

@@ -3,6 +3,7 @@
 # Extra arguments go to vitest (e.g. npm test -- --project unit).
 source "$(dirname "$0")/lib/common.sh"
 source "$ROOT/scripts/lib/stack.sh"
+source "$ROOT/scripts/lib/mail.sh"
 cd "$ROOT"
 
 ensure_node_modules
@@ -12,8 +13,8 @@ command -v pdftoppm >/dev/null || apt_install poppler-utils # renders the PDF sh
 
 mkdir -p "$ROOT/.tmp"
 # The fake SMTP server keeps what the app sends in a folder of this run (tests read it); it exits with this script.
-export SMTP_HOST=127.0.0.1 SMTP_PORT="$(free_port)" DEV_MAILBOX=true MAIL_DIR="$ROOT/.tmp/mail-test-$$"
-FAKE_SMTP_WATCH_PID=$$ npx tsx scripts/fake-smtp.ts >"$ROOT/.tmp/fake-smtp.log" 2>&1 &
+: >"$ROOT/.tmp/fake-smtp.log"
+start_fake_smtp "$ROOT/.tmp/mail-test-$$" "$ROOT/.tmp/fake-smtp.log"
 stack_up test
 
 status=0

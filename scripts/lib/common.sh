@@ -10,10 +10,31 @@ log() { printf '\033[0;36m[farfield]\033[0m %s\n' "$*" >&2; }
 
 as_root() { if [ "$(id -u)" -eq 0 ]; then "$@"; else sudo "$@"; fi; }
 
+# apt-get that waits (up to APT_LOCK_WAIT_SECONDS, 600) while another package manager holds Debian's
+# lock instead of failing at once with exit 100: apt waits for dpkg's lock itself (DPkg::Lock::Timeout);
+# the package lists' lock of `apt-get update` it does not wait for, so a locked answer is retried.
+apt_get() {
+  local wait="${APT_LOCK_WAIT_SECONDS:-600}" pause="${APT_LOCK_RETRY_SECONDS:-5}" status err
+  local until=$((SECONDS + wait)) told=""
+  while :; do
+    status=0
+    err="$(as_root env DEBIAN_FRONTEND=noninteractive apt-get -o DPkg::Lock::Timeout="$wait" "$@" 2>&1 >/dev/null)" || status=$?
+    [ "$status" -eq 0 ] && return 0
+    if [ "$status" -eq 100 ] && grep -qiE "could not get lock|unable to lock|unable to acquire the dpkg" <<<"$err" && [ "$SECONDS" -lt "$until" ]; then
+      [ -n "$told" ] || log "another package manager holds Debian's lock; waiting for it (up to $wait s)"
+      told=1
+      sleep "$pause"
+      continue
+    fi
+    printf '%s\n' "$err" >&2
+    return "$status"
+  done
+}
+
 apt_install() {
   log "installing Debian packages: $*"
-  as_root env DEBIAN_FRONTEND=noninteractive apt-get update -qq >/dev/null
-  as_root env DEBIAN_FRONTEND=noninteractive apt-get install -y -qq "$@" >/dev/null
+  apt_get update -qq
+  apt_get install -y -qq "$@"
 }
 
 pg_bindir() { ls -d /usr/lib/postgresql/*/bin 2>/dev/null | sort -V | tail -n 1; }
