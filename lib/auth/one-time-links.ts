@@ -1,8 +1,9 @@
-// Single-use links (invitations, password resets): a random token for the e-mail, only its SHA-256 kept.
+// Single-use links (invitations, password resets, sign-up confirmations): a random token for the e-mail, only its SHA-256 kept.
 import { hashToken, newToken } from "./token";
 
 export const INVITATION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
 export const RESET_LIFETIME_MS = 60 * 60 * 1000;
+export const SIGN_UP_LIFETIME_MS = 24 * 60 * 60 * 1000;
 
 /** A fresh token, the hash to store and when it stops working. */
 export function issueLinkToken(lifetimeMs: number, now = new Date()) {

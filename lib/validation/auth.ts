@@ -24,5 +24,8 @@ export const signUpSchema = z.object({
   programName: z.string().trim().min(1, "Name your band program.").max(160, "That name is too long."),
 });
 
+/** The link of the sign-up message, sent back to create the account. */
+export const signUpConfirmSchema = z.object({ token: z.string().min(1).max(200) });
+
 export type SignInInput = z.infer<typeof signInSchema>;
 export type SignUpInput = z.infer<typeof signUpSchema>;

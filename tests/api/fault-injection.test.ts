@@ -6,6 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { APP_URL, Client, uniqueEmail } from "../support/api";
 import { copyDemoShow } from "../support/show-copy";
 import { createCluster, startApp, type App, type Cluster } from "../support/stack";
+import { signUp } from "../support/sign-up";
 
 let cluster: Cluster;
 let app: App;
@@ -20,7 +21,7 @@ beforeAll(async () => {
   app = await startApp(cluster.url);
   sql = postgres(cluster.url, { max: 1, onnotice: () => {} });
   const client = new Client(app.url);
-  const up = await client.post("/api/auth/sign-up", { name: "Fault Director", email: uniqueEmail("fault"), password: "fault-director-pass", programName: "Fault Band" });
+  const up = await signUp(client, { name: "Fault Director", email: uniqueEmail("fault"), password: "fault-director-pass", programName: "Fault Band" });
   copy = { client, programId: up.body.programId, show: demo.show };
 }, 120_000);
 

@@ -25,6 +25,8 @@ interface Rule {
 const RULES: Record<string, Rule> = {
   "POST auth/sign-in": { roles: "public", body: "json" },
   "POST auth/sign-up": { roles: "public", body: "json" },
+  "GET auth/sign-up/confirm": { roles: "public" },
+  "POST auth/sign-up/confirm": { roles: "public", body: "json" },
   "POST auth/sign-out": { roles: "public", body: "none" },
   "POST auth/password-reset": { roles: "public", body: "json" },
   "GET auth/password-reset/confirm": { roles: "public" },

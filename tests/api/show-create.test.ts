@@ -1,11 +1,12 @@
 // Starting a new show: directors and designers, validated, with a press box and set 1 ready for the editor.
 import { describe, expect, it } from "vitest";
 import { Client, DEMO, demoIds, signedIn, uniqueEmail } from "../support/api";
+import { signUp } from "../support/sign-up";
 
 describe("creating a show", () => {
   it("gives a new program an empty show with the default press box and set 1", async () => {
     const c = new Client();
-    const up = await c.post("/api/auth/sign-up", { name: "New Director", email: uniqueEmail("newshow"), password: "new-director-pass", programName: "New Band" });
+    const up = await signUp(c, { name: "New Director", email: uniqueEmail("newshow"), password: "new-director-pass", programName: "New Band" });
     const res = await c.post(`/api/programs/${up.body.programId}/shows`, { name: "Autumn Winds", fieldRules: "college" });
     expect(res.status).toBe(201);
     const show = (await c.get(`/api/shows/${res.body.show.id}`)).body;

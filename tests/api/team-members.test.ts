@@ -3,11 +3,12 @@
 import { describe, expect, it } from "vitest";
 import { Client, uniqueEmail } from "../support/api";
 import { linkIn, tokenOf, waitForMail } from "../support/mail";
+import { signUp } from "../support/sign-up";
 
 async function newProgram() {
   const director = new Client();
   const email = uniqueEmail("dir");
-  const res = await director.post("/api/auth/sign-up", { name: "First Director", email, password: "first-director-pw", programName: "Members Test Band" });
+  const res = await signUp(director, { name: "First Director", email, password: "first-director-pw", programName: "Members Test Band" });
   expect(res.status).toBe(201);
   return { director, programId: res.body.programId as string, directorId: res.body.user.id as string };
 }

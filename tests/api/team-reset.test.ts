@@ -4,11 +4,12 @@ import { describe, expect, it } from "vitest";
 import { APP_URL, Client, uniqueEmail } from "../support/api";
 import { appDatabase } from "../support/database";
 import { linkIn, mailTo, tokenOf, waitForMail } from "../support/mail";
+import { signUp } from "../support/sign-up";
 
 async function account() {
   const email = uniqueEmail("reset");
   const c = new Client();
-  expect((await c.post("/api/auth/sign-up", { name: "Forgetful Fen", email, password: "old-password-1", programName: "Reset Band" })).status).toBe(201);
+  expect((await signUp(c, { name: "Forgetful Fen", email, password: "old-password-1", programName: "Reset Band" })).status).toBe(201);
   return { email, first: c };
 }
 

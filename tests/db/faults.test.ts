@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { Client, uniqueEmail } from "../support/api";
 import { launchBrowser } from "../support/browser";
 import { createCluster, startApp, type App, type Cluster } from "../support/stack";
+import { signUp } from "../support/sign-up";
 
 let cluster: Cluster;
 let a: App;
@@ -13,7 +14,7 @@ beforeAll(async () => {
   cluster = await createCluster("faults");
   [a, b] = await Promise.all([startApp(cluster.url), startApp(cluster.url)]);
   client = new Client(a.url);
-  const res = await client.post("/api/auth/sign-up", { name: "Fault Check", email: uniqueEmail("faults"), password: "fault-check-pass", programName: "Fault Band" });
+  const res = await signUp(client, { name: "Fault Check", email: uniqueEmail("faults"), password: "fault-check-pass", programName: "Fault Band" });
   expect(res.status).toBe(201);
 }, 120_000);
 
@@ -55,7 +56,7 @@ describe("two app processes on one database", () => {
 
   it("sign-in limits are shared: failures on one process lock the account on the other", async () => {
     const email = uniqueEmail("shared-limit");
-    await new Client(a.url).post("/api/auth/sign-up", { name: "Limit", email, password: "right-password-1", programName: "Limit Band" });
+    await signUp(new Client(a.url), { name: "Limit", email, password: "right-password-1", programName: "Limit Band" });
     for (let i = 0; i < 8; i++) await new Client(i % 2 ? a.url : b.url).post("/api/auth/sign-in", { email, password: `wrong-${i}` });
     expect((await new Client(b.url).post("/api/auth/sign-in", { email, password: "right-password-1" })).status).toBe(429);
   });

@@ -1,10 +1,11 @@
 // A private copy of the demo show: a new director signs up and imports the demo's export into their own
 // program, so a test can change it while other suites read and edit the demo itself.
 import { APP_URL, Client, DEMO, signedIn, uniqueEmail } from "./api";
+import { signUp } from "./sign-up";
 
 export async function copyDemoShow(tag: string) {
   const client = new Client();
-  const up = await client.post("/api/auth/sign-up", { name: `${tag} Director`, email: uniqueEmail(tag), password: `${tag}-director-pass`, programName: `${tag} Band` });
+  const up = await signUp(client, { name: `${tag} Director`, email: uniqueEmail(tag), password: `${tag}-director-pass`, programName: `${tag} Band` });
   if (up.status !== 201) throw new Error(`sign-up answered ${up.status}`);
   const programId = up.body.programId as string;
   const demo = await signedIn(DEMO.director);

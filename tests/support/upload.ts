@@ -1,5 +1,6 @@
 // Multipart uploads with a Client's session, and a private copy of the demo show to import into.
 import { APP_URL, Client, demoIds, uniqueEmail, type ApiAnswer } from "./api";
+import { signUp } from "./sign-up";
 
 export async function uploadFile(
   client: Client,
@@ -26,8 +27,8 @@ export async function privateShowCopy() {
   if (exported.status !== 200) throw new Error(`export answered ${exported.status}`);
   const director = new Client();
   const email = uniqueEmail("copy");
-  const signUp = await director.post("/api/auth/sign-up", { name: "Copy Director", email, password: "copy-director-pw", programName: "Copy Band" });
-  const programId = signUp.body.programId as string;
+  const created = await signUp(director, { name: "Copy Director", email, password: "copy-director-pw", programName: "Copy Band" });
+  const programId = created.body.programId as string;
   const imported = await uploadFile(director, `/api/programs/${programId}/shows/import`, { name: "show.json", content: JSON.stringify(exported.body), type: "application/json" });
   if (imported.status !== 201) throw new Error(`import answered ${imported.status}: ${JSON.stringify(imported.body)}`);
   return { director, email, password: "copy-director-pw", programId, showId: imported.body.show.id as string, original: exported.body, demo: ids };

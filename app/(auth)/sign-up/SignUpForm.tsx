@@ -1,6 +1,6 @@
 "use client";
-// Creates the account and its program, then opens the new program. The password is never refilled.
-import { useRouter } from "next/navigation";
+// Asks for the account and its program; the account is created from the link mailed to the address
+// (the answer is the same whether or not the address has an account). The password is never refilled.
 import { useState } from "react";
 import { Button } from "@/components/Button";
 import { FormMessage } from "@/components/FormMessage";
@@ -12,19 +12,25 @@ import { signUpSchema } from "@/lib/validation/auth";
 type Fields = { name: string; email: string; programName: string };
 
 export function SignUpForm() {
-  const router = useRouter();
   const [fields, setFields] = useState<Fields>({ name: "", email: "", programName: "" });
-  const { password, issues, message, status, pending, submitWith } = usePasswordForm<typeof signUpSchema, { programId: string }>({
+  const [sent, setSent] = useState<string | null>(null);
+  const { password, issues, message, status, pending, submitWith } = usePasswordForm<typeof signUpSchema, { message: string }>({
     schema: signUpSchema,
     url: "/api/auth/sign-up",
-    text: { pending: "Creating your account…", done: "Account created. Opening your program…", failed: "Creating the account failed. Try again." },
-    onDone: (res) => {
-      router.replace(res ? `/programs/${res.programId}` : "/programs");
-      router.refresh();
-    },
+    text: { pending: "Sending…", done: "Check your e-mail.", failed: "Sending failed. Try again." },
+    onDone: (res) => setSent(res?.message ?? "Check your e-mail to continue."),
   });
   const set = (key: keyof Fields) => (e: { target: { value: string } }) => setFields((f) => ({ ...f, [key]: e.target.value }));
   const onSubmit = submitWith(fields);
+  if (sent) {
+    return (
+      <div role="status" className="space-y-3">
+        <p className="text-lg font-semibold text-ink">Check your e-mail</p>
+        <p>{sent}</p>
+        <p className="text-ink-soft">No message? Check the address and your spam folder, or sign up again in a few minutes.</p>
+      </div>
+    );
+  }
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-5" aria-describedby="sign-up-status">
       <TextField id="name" name="name" label="Your name" autoComplete="name" required value={fields.name} onChange={set("name")} errors={issues.name} />
@@ -67,7 +73,7 @@ export function SignUpForm() {
         {message}
       </FormMessage>
       <Button type="submit" disabled={pending} className="w-full">
-        {pending ? "Creating…" : "Create account"}
+        {pending ? "Sending…" : "Create account"}
       </Button>
     </form>
   );

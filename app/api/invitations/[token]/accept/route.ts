@@ -28,7 +28,8 @@ export const POST = route<{ token: string }>(async (req, { token }) => {
   let who: Parameters<typeof acceptInvitation>[1];
   if (account) {
     if (user?.id !== account.id) {
-      if (!body.password) throw new HttpError(401, `Enter the password of ${invitation.email} to join.`);
+      // The page does not know whether the address has an account; a "new account" form lands here too.
+      if (!body.password || body.name) throw new HttpError(401, `${invitation.email} has a Farfield account already: enter its password to join.`);
       const address = clientAddress(req);
       await assertSignInAllowed(invitation.email, address);
       if (!(await verifyPassword(account.passwordHash, body.password))) {
@@ -39,7 +40,7 @@ export const POST = route<{ token: string }>(async (req, { token }) => {
     }
     who = { userId: account.id };
   } else {
-    if (!body.name) throw badRequest("The request body is not valid.", { name: ["Enter your name."] });
+    if (!body.name) throw badRequest(`${invitation.email} has no Farfield account yet: enter your name and choose a password.`, { name: ["Enter your name."] });
     const password = parseWith(newAccountPassword, body.password ?? "", "The password");
     who = { newUser: { email: invitation.email, name: body.name, passwordHash: await hashPassword(password) } };
   }

@@ -6,6 +6,7 @@ import { INVITATION_LIFETIME_MS, issueLinkToken } from "@/lib/auth/one-time-link
 import { conflict, notFound } from "@/lib/http/errors";
 import { readJson } from "@/lib/http/body";
 import { route } from "@/lib/http/handler";
+import { reserveInvitationMail } from "@/lib/mail/limits";
 import { sendInvitation } from "@/lib/mail/send-invitation";
 import { inviteSchema } from "@/lib/validation/team";
 
@@ -17,13 +18,14 @@ export const GET = route<Params>(async (_req, { programId }) => {
   return NextResponse.json({ invitations: await listOpenInvitations(programId) });
 });
 
-/** Invites an address with a role and e-mails the link; an earlier open invitation for it is revoked. */
+/** Invites an address with a role and e-mails the link; an earlier open invitation for it is revoked. 429 past the day's invitations of the program or the sender. */
 export const POST = route<Params>(async (req, { programId }) => {
   const { user } = await requireProgram(programId, "manage-members");
   const input = await readJson(req, inviteSchema, 4_000);
   const program = await findProgram(programId);
   if (!program) throw notFound("No such program.");
   if (await isMemberByEmail(programId, input.email)) throw conflict(`${input.email} is already a member of this program.`);
+  await reserveInvitationMail(programId, user.id, input.email);
   const { token, tokenHash, expiresAt } = issueLinkToken(INVITATION_LIFETIME_MS);
   const invitation = await createInvitation({ programId, email: input.email, role: input.role, tokenHash, expiresAt, invitedBy: user.id });
   const mailed = await sendInvitation({ email: input.email, token, programName: program.name, role: input.role, inviterName: user.name, expiresAt });
