@@ -8,17 +8,21 @@
 # however they end (FAKE_SMTP_WATCH_PID backs this up for processes that keep the pipe longer).
 # Without LOG it writes to this script's output.
 start_fake_smtp() {
-  local dir="$1" log="${2:-/dev/stdout}" portfile pid deadline
+  local dir="$1" log="${2:-}" portfile pid deadline
   mkdir -p "$ROOT/.tmp" "$dir"
   portfile="$ROOT/.tmp/fake-smtp-port-$$-$RANDOM"
   rm -f "$portfile"
-  exec {FAKE_SMTP_FD}> >(MAIL_DIR="$dir" SMTP_HOST=127.0.0.1 SMTP_PORT="${FAKE_SMTP_PORT:-0}" FAKE_SMTP_PORT_FILE="$portfile" \
-    FAKE_SMTP_EXIT_ON_EOF=1 FAKE_SMTP_WATCH_PID=$$ exec "$ROOT/node_modules/.bin/tsx" "$ROOT/scripts/fake-smtp.ts" >>"$log" 2>&1)
+  # Inherited output is left as it is (reopening a file there would write over the script's own lines).
+  exec {FAKE_SMTP_FD}> >(
+    [ -z "$log" ] || exec >>"$log" 2>&1
+    MAIL_DIR="$dir" SMTP_HOST=127.0.0.1 SMTP_PORT="${FAKE_SMTP_PORT:-0}" FAKE_SMTP_PORT_FILE="$portfile" \
+      FAKE_SMTP_EXIT_ON_EOF=1 FAKE_SMTP_WATCH_PID=$$ exec "$ROOT/node_modules/.bin/tsx" "$ROOT/scripts/fake-smtp.ts"
+  )
   pid=$!
   deadline=$((SECONDS + 60))
   until [ -s "$portfile" ]; do
     if ! kill -0 "$pid" 2>/dev/null || [ "$SECONDS" -ge "$deadline" ]; then
-      [ "$log" = /dev/stdout ] || tail -n 5 "$log" >&2
+      [ -z "$log" ] || tail -n 5 "$log" >&2
       log "the local fake SMTP server did not start${FAKE_SMTP_PORT:+ on port $FAKE_SMTP_PORT}; see the lines above"
       return 1
     fi
