@@ -122,6 +122,8 @@ export const shows = pgTable(
     groundFactor: doublePrecision("ground_factor"),
     /** The director's thresholds for the balance checks; null keeps the defaults. */
     checkTargets: jsonb("check_targets"),
+    /** The director's musical limits for the balance plan (lib/acoustics/plan-limits.ts); null keeps the defaults. */
+    planLimits: jsonb("plan_limits"),
     /** Moved by database triggers on every write to a show-wide input of the analyses (migration 0005). */
     inputsRevision: bigint("inputs_revision", { mode: "number" }).notNull().default(0),
     createdAt: createdAt(),
@@ -258,6 +260,8 @@ export const phrases = pgTable(
     lastSetId: uuid("last_set_id")
       .notNull()
       .references(() => sets.id, { onDelete: "cascade" }),
+    /** Musical limits of this phrase laid over the show's; null keeps the show's. */
+    planLimits: jsonb("plan_limits"),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },

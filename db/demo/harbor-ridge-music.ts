@@ -72,9 +72,11 @@ export const HARBOR_RIDGE_PHRASES: DemoPhrase[] = [
     }),
     overrides: [],
   },
-  // The ballad: the clarinets sing p over a p brass chorale, the case the balance plan must fix.
+  // The ballad: the clarinets sing p over a p brass chorale, the case the balance plan must fix. The
+  // clarinets stand deep and carry poorly, so the director lets the plan move the winds up to four steps here.
   {
     name: "Clarinet song",
+    planLimits: { windSteps: 4 },
     firstSet: "7",
     lastSet: "8",
     sections: voicing(TACET, {

@@ -93,7 +93,7 @@ export function demoRows(
       });
       show.phrases.forEach((ph, i) => {
         const id = randomUUID();
-        rows.phrases.push({ id, showId, name: ph.name, order: i + 1, firstSetId: lookup(setIds, ph.firstSet, "set"), lastSetId: lookup(setIds, ph.lastSet, "set") });
+        rows.phrases.push({ id, showId, name: ph.name, order: i + 1, firstSetId: lookup(setIds, ph.firstSet, "set"), lastSetId: lookup(setIds, ph.lastSet, "set"), planLimits: ph.planLimits ?? null });
         for (const [section, v] of Object.entries(ph.sections))
           rows.voiceAssignments.push({ phraseId: id, section, voice: v.voice, writtenDynamic: v.dynamic });
         for (const o of ph.overrides)

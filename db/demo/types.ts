@@ -50,6 +50,8 @@ export interface DemoPhrase {
   /** Every section's voice and written dynamic. */
   sections: Record<string, DemoVoice>;
   overrides: DemoOverride[];
+  /** The director's musical limits for this phrase's balance plan, over the defaults. */
+  planLimits?: { windSteps?: number; percussionSteps?: number; keepShape?: boolean };
 }
 
 export interface DemoListeningPoint {

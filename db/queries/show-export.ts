@@ -1,5 +1,6 @@
 // A whole show as one show file (no ids), and a show file written back as a new show in one transaction.
 import { and, asc, eq, inArray } from "drizzle-orm";
+import { storedLimits } from "@/lib/analysis/plan-limits";
 import { SHOW_FILE_FORMAT, SHOW_FILE_VERSION, type ShowFile } from "@/lib/show-file/schema";
 import { db } from "../client";
 import { listeningPoints, movements, performerOverrides, performers, phrases, positions, sets, shows, voiceAssignments } from "../schema";
@@ -7,6 +8,12 @@ import { uploads } from "../schema-team";
 import { finitePosition } from "./finite-positions";
 
 const byText = <T>(key: (t: T) => string) => (a: T, b: T) => (key(a) < key(b) ? -1 : key(a) > key(b) ? 1 : 0);
+
+/** Stored musical limits as the file keeps them: only valid fields, null for none. */
+function limitsOrNull(stored: unknown) {
+  const limits = storedLimits(stored);
+  return Object.keys(limits).length ? limits : null;
+}
 
 export async function loadShowFile(showId: string): Promise<ShowFile | null> {
   const [show] = await db.select().from(shows).where(eq(shows.id, showId));
@@ -36,6 +43,7 @@ export async function loadShowFile(showId: string): Promise<ShowFile | null> {
       fieldRules: show.fieldRules,
       conditions: { temperatureC: show.temperatureC, relativeHumidityPct: show.relativeHumidityPct, pressureKPa: show.pressureKPa, groundFactor: show.groundFactor },
       checkTargets: show.checkTargets ?? null,
+      planLimits: limitsOrNull(show.planLimits),
     },
     listeningPoints: points.map((l) => ({ name: l.name, x: l.x, y: l.y, z: l.z, order: l.order })),
     performers: roster
@@ -52,6 +60,7 @@ export async function loadShowFile(showId: string): Promise<ShowFile | null> {
         .sort(byText((p) => p.label)),
     })),
     phrases: phraseRows.map((p) => ({
+      planLimits: limitsOrNull(p.planLimits),
       name: p.name,
       firstSet: numberOfSet.get(p.firstSetId)!,
       lastSet: numberOfSet.get(p.lastSetId)!,
@@ -89,6 +98,7 @@ export async function importShowFile(
         pressureKPa: c.pressureKPa,
         groundFactor: c.groundFactor,
         checkTargets: file.show.checkTargets ?? null,
+        planLimits: file.show.planLimits ?? null,
       })
       .returning({ id: shows.id });
     const showId = show!.id;
@@ -119,7 +129,7 @@ export async function importShowFile(
     for (const [i, p] of file.phrases.entries()) {
       const [phrase] = await tx
         .insert(phrases)
-        .values({ showId, name: p.name, order: i + 1, firstSetId: setId.get(p.firstSet)!, lastSetId: setId.get(p.lastSet)! })
+        .values({ showId, name: p.name, order: i + 1, firstSetId: setId.get(p.firstSet)!, lastSetId: setId.get(p.lastSet)!, planLimits: p.planLimits ?? null })
         .returning({ id: phrases.id });
       const phraseId = phrase!.id;
       if (p.voices.length) await tx.insert(voiceAssignments).values(p.voices.map((v) => ({ phraseId, ...v })));

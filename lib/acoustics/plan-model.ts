@@ -1,11 +1,12 @@
 // The balance plan as numbers: sections that may change (units), the groups whose levels the
-// targets compare (voices, registers of a choir, sections within a voice) and the targets as
-// hinge residuals in dB. Levels are exact for whole dynamic steps (per-band source change,
-// A-weighted at the point) and a uniform dB shift in between, for the continuous solve.
+// targets compare (voices, registers of a choir, sections within a voice), the targets as hinge
+// residuals in dB, and the musical limits (each unit's step range, the written shape). Levels are
+// exact for whole dynamic steps: per-band source change, A-weighted at the point.
 import { OCTAVE_BANDS, BAND_COUNT } from "./bands";
-import { groupBy, soundingPlayers, type BoxPlayer } from "./box-players";
+import { catalogOf, groupBy, soundingPlayers, type BoxPlayer } from "./box-players";
 import { PYRAMID_FAMILIES, REGISTERS_LOW_TO_HIGH } from "./checks";
 import { instrumentBandsInto } from "./instrument";
+import type { MusicalLimits } from "./plan-limits";
 import type { BalanceTargets } from "./targets";
 import { DYNAMICS, VOICES, type AnalysisInput, type Dynamic, type InstrumentSpec, type PointResult, type Voice } from "./types";
 import { aWeightingDb } from "./weighting";
@@ -21,9 +22,27 @@ export interface PlanUnit {
   /** Index of the written dynamic in pp…fff. */
   base: number;
   performerIds: string[];
-  /** Steps allowed: from pp (kMin = −base) to fff (kMax = TOP − base). */
+  /** Battery and front ensemble (percussion, keyboards, amplified) plan within their own limits. */
+  kind: "winds" | "percussion";
+  /** One player of a section that otherwise rests or plays something else (a soloist). */
+  solo: boolean;
+  /** Steps allowed: within pp…fff and the musical limits (both 0 when nothing is to change). */
   kMin: number;
   kMax: number;
+}
+
+/** Families planned as the battery and front ensemble. */
+const PERCUSSION_FAMILIES: readonly string[] = ["percussion", "keyboard", "amplified"];
+
+/**
+ * The written shape, between two units of the same kind: `louder` is written above `softer`.
+ * hard: the melody over a harmony voice, never planned further under it than written.
+ * Otherwise a soft rule: each step `softer` is planned above `louder` costs SHAPE_WEIGHT.
+ */
+export interface ShapePair {
+  louder: number;
+  softer: number;
+  hard: boolean;
 }
 
 export type TargetKind = "melody-lead" | "pyramid" | "blend";
@@ -57,6 +76,7 @@ export interface PlanModel {
   groupUnits: Int32Array[];
   stepEnergy: Float64Array[][];
   residuals: Residual[];
+  shape: ShapePair[];
 }
 
 /** A-weighted energy at the point of one player at every dynamic pp…fff, from its band levels at its own dynamic.
@@ -93,26 +113,57 @@ function energiesByDynamic(p: BoxPlayer, ratioCache: Map<InstrumentSpec, Float64
   return out;
 }
 
-/** Per section, the most common (voice, dynamic) of its sounding players over all sets: what the section plays. */
-function findUnits(sets: BoxPlayer[][]): PlanUnit[] {
+/**
+ * Per section, the most common (voice, dynamic) of its sounding players over all sets: what the section
+ * plays. In score order (the catalog's order: woodwinds, brass, battery, front ensemble), then by name.
+ */
+function findUnits(inputs: readonly AnalysisInput[], sets: BoxPlayer[][], limits: MusicalLimits, nothingToChange: boolean): PlanUnit[] {
   const all = sets.flat();
-  const units: PlanUnit[] = [];
+  const score = new Map(Object.keys(catalogOf(inputs[0] ?? {})).map((key, i) => [key, i]));
+  const sectionSize = new Map<string, Set<string>>();
+  for (const input of inputs) for (const p of input.performers) (sectionSize.get(p.section) ?? sectionSize.set(p.section, new Set()).get(p.section)!).add(p.id);
+  const units: (PlanUnit & { score: number })[] = [];
   for (const [section, list] of groupBy(all, (p) => p.section)) {
     const counts = groupBy(list, (p) => `${p.voice}\u0000${p.dynamic}`);
-    const [, chosen] = [...counts].reduce((a, b) => (b[1].length > a[1].length ? b : a));
+    const [, chosen] = [...counts].reduce((a, b) => (b[1].length > a[1].length || (b[1].length === a[1].length && b[0] < a[0]) ? b : a));
     const first = chosen[0]!;
     const base = DYNAMICS.indexOf(first.dynamic);
+    const performerIds = [...new Set(chosen.map((p) => p.id))].sort();
+    const kind = PERCUSSION_FAMILIES.includes(first.family) ? "percussion" : "winds";
+    const steps = nothingToChange ? 0 : kind === "percussion" ? limits.percussionSteps : limits.windSteps;
     units.push({
       section,
       voice: first.voice as Voice,
       writtenDynamic: first.dynamic,
       base,
-      performerIds: [...new Set(chosen.map((p) => p.id))],
-      kMin: -base,
-      kMax: TOP - base,
+      performerIds,
+      kind,
+      solo: performerIds.length === 1 && (sectionSize.get(section)?.size ?? 1) > 1,
+      kMin: Math.max(-base, -steps),
+      kMax: Math.min(TOP - base, steps),
+      score: Math.min(...chosen.map((p) => score.get(p.instrument) ?? score.size)),
     });
   }
-  return units;
+  units.sort((a, b) => a.score - b.score || (a.section < b.section ? -1 : a.section > b.section ? 1 : 0));
+  return units.map(({ score: _, ...u }) => u);
+}
+
+/** Voices the melody is never planned under (when the shape is kept). */
+const UNDER_MELODY: readonly Voice[] = ["countermelody", "accompaniment", "bass"];
+
+/** The written shape between units of the same kind (see ShapePair). */
+function shapePairs(units: readonly PlanUnit[]): ShapePair[] {
+  const pairs: ShapePair[] = [];
+  units.forEach((a, i) =>
+    units.forEach((b, j) => {
+      if (i === j || a.kind !== b.kind) return;
+      const hard = a.voice === "melody" && UNDER_MELODY.includes(b.voice);
+      // The melody may rise over a harmony voice written louder: that is the lead the targets ask for.
+      const melodyOver = b.voice === "melody" && UNDER_MELODY.includes(a.voice);
+      if (hard || (a.base > b.base && !melodyOver)) pairs.push({ louder: i, softer: j, hard });
+    }),
+  );
+  return pairs;
 }
 
 /** Builds the model of a plan over one or more sets (a phrase) at one listening point. */
@@ -120,10 +171,12 @@ export function buildPlanModel(
   inputs: readonly AnalysisInput[],
   points: readonly PointResult[],
   t: BalanceTargets,
+  limits: MusicalLimits,
+  nothingToChange: boolean,
   setLabels?: readonly string[],
 ): PlanModel {
   const sets = inputs.map((input, n) => soundingPlayers(input, points[n]!));
-  const units = findUnits(sets);
+  const units = findUnits(inputs, sets, limits, nothingToChange);
   const unitOf = new Map<string, number>();
   units.forEach((u, i) => u.performerIds.forEach((id) => unitOf.set(`${u.section}\u0000${id}`, i)));
 
@@ -221,6 +274,7 @@ export function buildPlanModel(
     playerEnergy,
     groups,
     residuals,
+    shape: limits.keepShape ? shapePairs(units) : [],
   };
   return { ...model, ...stepTables(model) };
 }
@@ -250,16 +304,16 @@ function stepTables(m: Pick<PlanModel, "units" | "playerUnit" | "playerBase" | "
 }
 
 /**
- * Level (dB) of group g with unit u at step k[u], its energy there also scaled by factor[u] when given;
- * with `share`, also each playing unit's share of the group's energy (share[j] for groupUnits[g][j]).
+ * Level (dB) of group g with unit u at step k[u]; with `share`, also each playing unit's share of the
+ * group's energy (share[j] for groupUnits[g][j]).
  */
-function groupLevel(m: PlanModel, g: number, k: ArrayLike<number>, factor?: ArrayLike<number>, share?: Float64Array): number {
+function groupLevel(m: PlanModel, g: number, k: ArrayLike<number>, share?: Float64Array): number {
   const units = m.groupUnits[g]!;
   const tables = m.stepEnergy[g]!;
   let e = m.heldEnergy[g]!;
   for (let j = 0; j < units.length; j++) {
     const u = units[j]!;
-    const ej = tables[j]![k[u]! - m.units[u]!.kMin]! * (factor ? factor[u]! : 1);
+    const ej = tables[j]![k[u]! - m.units[u]!.kMin]!;
     if (share) share[j] = ej;
     e += ej;
   }
@@ -267,29 +321,18 @@ function groupLevel(m: PlanModel, g: number, k: ArrayLike<number>, factor?: Arra
   return 10 * Math.log10(e);
 }
 
-function levels(m: PlanModel, k: ArrayLike<number>, factor?: ArrayLike<number>, share?: Float64Array[]): Float64Array {
+/** Group levels at whole steps k per unit (exact); with `share`, each playing unit's share of its groups' energy. */
+export function levelsAtSteps(m: PlanModel, k: ArrayLike<number>, share?: Float64Array[]): Float64Array {
   const L = new Float64Array(m.groups.length);
-  for (let g = 0; g < L.length; g++) L[g] = groupLevel(m, g, k, factor, share?.[g]);
+  for (let g = 0; g < L.length; g++) L[g] = groupLevel(m, g, k, share?.[g]);
   return L;
 }
 
-const sharesOf = (m: PlanModel) => m.groupUnits.map((units) => new Float64Array(units.length));
-
-/** Group levels and unit shares at whole steps k per unit (exact). */
-export function levelsAtSteps(m: PlanModel, k: readonly number[]) {
-  const share = sharesOf(m);
-  return { L: levels(m, k, undefined, share), share };
-}
-
-/** Group levels and unit shares (∂L/∂x) for a uniform dB shift x[u] from the written dynamic (the continuous relaxation). */
-export function levelsAtShifts(m: PlanModel, x: readonly number[]) {
-  const share = sharesOf(m);
-  const written = new Array<number>(m.units.length).fill(0);
-  return { L: levels(m, written, x.map((v) => 10 ** (v / 10)), share), share };
-}
+/** Empty share arrays for levelsAtSteps. */
+export const sharesOf = (m: PlanModel) => m.groupUnits.map((units) => new Float64Array(units.length));
 
 /** Sum of squared target residuals at the given group levels. */
-function targetCost(m: PlanModel, L: ArrayLike<number>): number {
+export function targetCost(m: PlanModel, L: ArrayLike<number>): number {
   let cost = 0;
   for (const r of m.residuals) {
     let v = r.c;
@@ -297,50 +340,6 @@ function targetCost(m: PlanModel, L: ArrayLike<number>): number {
     if (v > 0) cost += v * v;
   }
   return cost;
-}
-
-/**
- * Whole steps k per unit and the group levels there, for the polish's trial moves: a move of one or
- * two units re-levels only the groups those units play in, and undo() puts them back.
- */
-export function stepSearch(m: PlanModel, start: readonly number[]) {
-  const unitGroups = m.units.map((): number[] => []);
-  m.groupUnits.forEach((units, g) => units.forEach((u) => unitGroups[u]!.push(g)));
-  const k = [...start];
-  const L = levels(m, k);
-  const seen = new Int32Array(m.groups.length);
-  let mark = 0;
-  let undo: { move: readonly (readonly [number, number])[]; groups: number[]; levels: number[] } | null = null;
-  return {
-    k: k as readonly number[],
-    targetCost: () => targetCost(m, L),
-    /** Moves unit u by d steps for each [u, d], unless that leaves pp…fff (then nothing moves and it answers false). */
-    move(move: readonly (readonly [number, number])[]): boolean {
-      if (move.some(([u, d]) => k[u]! + d < m.units[u]!.kMin || k[u]! + d > m.units[u]!.kMax)) return false;
-      for (const [u, d] of move) k[u]! += d;
-      mark++;
-      const groups: number[] = [];
-      const before: number[] = [];
-      for (const [u] of move) {
-        for (const g of unitGroups[u]!) {
-          if (seen[g] === mark) continue;
-          seen[g] = mark;
-          groups.push(g);
-          before.push(L[g]!);
-          L[g] = groupLevel(m, g, k);
-        }
-      }
-      undo = { move, groups, levels: before };
-      return true;
-    },
-    /** Takes back the last move. */
-    undo() {
-      if (!undo) return;
-      for (const [u, d] of undo.move) k[u]! -= d;
-      undo.groups.forEach((g, i) => (L[g] = undo!.levels[i]!));
-      undo = null;
-    },
-  };
 }
 
 /** Value of each target residual (dB, ≥ 0) at the given group levels. */

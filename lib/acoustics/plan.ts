@@ -1,28 +1,16 @@
 // The balance plan: per section, written dynamic → played dynamic that best meets the targets
-// at one listening point (melody lead, bass-up pyramid, blend of doubled parts), staying as
-// close as it can to what is written and within pp…fff.
-//
-// Solve: a bounded least-squares over each section's dB change (targets as hinge residuals,
-// plus a small weight on each change), then whole dynamic steps: the continuous optimum rounded
-// to the nearest step and polished by single and paired step moves on the exact step levels.
-import { boundedLeastSquares, type ResidualModel, type SparseRow } from "./bounded-least-squares";
+// at one listening point (melody lead, bass-up pyramid, blend of doubled parts), within the musical
+// limits (plan-limits.ts) and as close as it can to what is written. The objective and its exact
+// minimum over whole dynamic steps are in plan-search.ts.
+import { checkBalance } from "./checks";
 import { AcousticsInputError } from "./errors";
 import { createSetEvaluator } from "./evaluator";
-import {
-  buildPlanModel,
-  levelsAtShifts,
-  levelsAtSteps,
-  residualValues,
-  unitChangeDb,
-  stepSearch,
-  type PlanModel,
-  type TargetKind,
-} from "./plan-model";
+import { resolveLimits, type MusicalLimits } from "./plan-limits";
+import { buildPlanModel, levelsAtSteps, residualValues, sharesOf, unitChangeDb, type PlanModel, type TargetKind } from "./plan-model";
+import { costAtSteps, searchPlan } from "./plan-search";
 import { resolveTargets, type BalanceTargets } from "./targets";
 import { DYNAMICS, type AnalysisInput, type Dynamic, type PlanEntry, type Voice } from "./types";
 
-/** Weight of a dB of change against a dB of target missed: 0.01, so the targets come first and closeness to what is written decides between plans that meet them equally. */
-const CHANGE_WEIGHT = 0.01;
 /** A target is reported unmet when missed by more than this (dB). */
 export const UNMET_TOLERANCE_DB = 0.1;
 
@@ -30,14 +18,20 @@ export interface PlanEntryDetail extends PlanEntry {
   voice: Voice;
   /** The players the change applies to (the section's players of that voice and written dynamic). */
   performerIds: string[];
-  /** Set when the section stops at the end of its range while a target still asks for more. */
-  atLimit?: "pp" | "fff";
+  /** Battery and front ensemble (planned within their own limits) or winds. */
+  kind: "winds" | "percussion";
+  /** One player of a section that otherwise rests or plays something else (a soloist). */
+  solo: boolean;
+  /** Set when the section stops at the end of what it may play (pp, fff or the musical limits) while a target still asks for more. */
+  atLimit?: Dynamic;
   /** Targets involving this section that the plan cannot meet. */
   unreachable?: string[];
 }
 
 export interface UnmetTarget {
   kind: TargetKind;
+  /** Identifies the target (the same across sets). */
+  key: string;
   shortDb: number;
   detail: string;
   sections: string[];
@@ -47,85 +41,98 @@ export interface BalancePlan {
   listeningPointId: string;
   entries: PlanEntryDetail[];
   unmet: UnmetTarget[];
+  /** The objective of the plan (planCost of its entries). */
+  cost: number;
+  /** False only when the search stopped at its node cap before proving the plan best. */
+  proven: boolean;
+  /** Every balance check passes as written in every set: the plan keeps what is written. */
+  nothingToChange: boolean;
+  limits: MusicalLimits;
 }
 
 export type PlanInput = Pick<AnalysisInput, "performers" | "listeningPoints" | "conditions" | "instruments">;
 
-function pointResultAt(input: PlanInput, listeningPointId: string) {
-  const point = input.listeningPoints.find((l) => l.id === listeningPointId);
-  if (!point) throw new AcousticsInputError("listeningPointId", `"${listeningPointId}" is not a listening point of the input`);
-  const evaluator = createSetEvaluator({ ...input, listeningPoints: [point] });
-  evaluator.evaluate();
-  return evaluator.result().points[0]!;
-}
+/** An entry as planCost reads it. */
+export type PlanCostEntry = Pick<PlanEntryDetail, "section" | "voice" | "writtenDynamic" | "playedDynamic">;
 
-/** The continuous relaxation: residuals (targets, then each change) and their sparse Jacobian. */
-function relaxation(m: PlanModel): ResidualModel {
-  const U = m.units.length;
-  const dense = new Float64Array(U); // one row's entries, gathered before they are listed
+/** The plan's model at one listening point: units, targets, limits, and each unit's change at each step. */
+export function planProblem(
+  inputs: readonly PlanInput[],
+  listeningPointId: string,
+  targets?: Partial<BalanceTargets> | null,
+  limits?: Partial<MusicalLimits> | null,
+  setLabels?: readonly string[],
+) {
+  const t = resolveTargets(targets);
+  const l = resolveLimits(limits);
+  const full: AnalysisInput[] = inputs.map((input) => {
+    const point = input.listeningPoints.find((p) => p.id === listeningPointId);
+    if (!point) throw new AcousticsInputError("listeningPointId", `"${listeningPointId}" is not a listening point of the input`);
+    return { ...input, listeningPoints: [point] };
+  });
+  const points = full.map((input) => {
+    const evaluator = createSetEvaluator(input);
+    evaluator.evaluate();
+    return evaluator.result().points[0]!;
+  });
+  const nothingToChange = full.length > 0 && full.every((input, n) => checkBalance(input, points[n]!, t).every((c) => c.passed));
+  const model = buildPlanModel(full, points, t, l, nothingToChange, setLabels);
+  const change = unitChangeDb(model);
   return {
-    evaluate(x: readonly number[]) {
-      const { L, share } = levelsAtShifts(m, x);
-      const values = residualValues(m, L);
-      const J: SparseRow[] = m.residuals.map((res, i) => {
-        const cols: number[] = [];
-        if (values[i]! <= 0) return { cols, vals: [] };
-        for (const t of res.terms) {
-          const units = m.groupUnits[t.group]!;
-          const parts = share[t.group]!;
-          for (let j = 0; j < units.length; j++) {
-            const u = units[j]!;
-            if (!cols.includes(u)) cols.push(u);
-            dense[u]! += t.coef * parts[j]!;
-          }
+    model,
+    change,
+    limits: l,
+    nothingToChange,
+    /** Steps per unit for a list of entries: a unit without an entry plays as written. */
+    stepsOf(entries: readonly PlanCostEntry[]): number[] {
+      const k = model.units.map(() => 0);
+      entries.forEach((e, i) => {
+        const u = model.units.findIndex((x) => x.section === e.section);
+        const unit = model.units[u];
+        if (!unit || unit.voice !== e.voice || unit.writtenDynamic !== e.writtenDynamic) {
+          throw new AcousticsInputError(`entries[${i}]`, `does not match what ${e.section} plays in the input`);
         }
-        const vals = cols.map((u) => dense[u]!);
-        cols.forEach((u) => (dense[u] = 0));
-        return { cols, vals };
+        k[u] = DYNAMICS.indexOf(e.playedDynamic) - unit.base;
       });
-      for (let u = 0; u < U; u++) J.push({ cols: [u], vals: [CHANGE_WEIGHT] });
-      return { r: [...values, ...x.map((v) => CHANGE_WEIGHT * v)], J };
+      return k;
     },
   };
 }
 
-/** Whole steps: nearest to the continuous optimum, then single (±1, ±2) and paired (±1, ±1) moves while the cost falls. */
-function polishSteps(m: PlanModel, change: number[][], start: number[]): number[] {
-  const search = stepSearch(m, start);
-  const cost = () => {
-    let c = search.targetCost();
-    search.k.forEach((s, u) => (c += (CHANGE_WEIGHT * change[u]![s - m.units[u]!.kMin]!) ** 2));
-    return c;
-  };
-  type Move = [unit: number, steps: number][];
-  const U = m.units.length;
-  const singles: Move[] = [];
-  for (let u = 0; u < U; u++) for (const d of [-2, -1, 1, 2]) singles.push([[u, d]]);
-  const pairs: Move[] = [];
-  for (let a = 0; a < U; a++) {
-    for (let b = a + 1; b < U; b++) {
-      for (const da of [-1, 1]) for (const db of [-1, 1]) pairs.push([[a, da], [b, db]]);
-    }
-  }
-  let best = cost();
-  /** Tries each move from the current steps, keeping those that lower the cost; true if one did. */
-  const sweep = (moves: Move[]) => {
-    let improved = false;
-    for (const move of moves) {
-      if (!search.move(move)) continue;
-      const c = cost();
-      if (c < best - 1e-12) {
-        best = c;
-        improved = true;
-      } else search.undo();
-    }
-    return improved;
-  };
-  for (let round = 0; round < 100; round++) {
-    if (sweep(singles)) continue;
-    if (!sweep(pairs)) break;
-  }
-  return [...search.k];
+/**
+ * The plan's objective for any list of entries (see plan-search.ts): target residuals, change and shape;
+ * Infinity for a plan outside the musical limits. Sections without an entry play as written.
+ */
+export function planCost(
+  inputs: readonly PlanInput[],
+  listeningPointId: string,
+  targets: Partial<BalanceTargets> | null | undefined,
+  entries: readonly PlanCostEntry[],
+  limits?: Partial<MusicalLimits> | null,
+): number {
+  const p = planProblem(inputs, listeningPointId, targets, limits);
+  return costAtSteps(p.model, p.change, p.stepsOf(entries));
+}
+
+/** Targets missed by more than the tolerance at steps k, worst over the sets, with the units involved. */
+export function unmetAtSteps(m: PlanModel, k: readonly number[]) {
+  const share = sharesOf(m);
+  const values = residualValues(m, levelsAtSteps(m, k, share));
+  const push = new Array<number>(m.units.length).fill(0); // ∂(target cost)/∂(uniform shift of the unit)
+  const byKey = new Map<string, UnmetTarget & { units: Set<number> }>();
+  m.residuals.forEach((res, i) => {
+    const v = values[i]!;
+    if (v <= 0) return;
+    for (const term of res.terms) m.groupUnits[term.group]!.forEach((u, j) => (push[u]! += 2 * v * term.coef * share[term.group]![j]!));
+    if (v <= UNMET_TOLERANCE_DB) return;
+    const seen = byKey.get(res.key);
+    if (!seen || seen.shortDb < v) {
+      const units = new Set([...(seen?.units ?? []), ...res.units]);
+      byKey.set(res.key, { kind: res.kind, key: res.key, shortDb: v, detail: res.describe(v), sections: [], units });
+    } else res.units.forEach((u) => seen.units.add(u));
+  });
+  const unmet = [...byKey.values()].map(({ units, ...rest }) => ({ ...rest, units: [...units], sections: [...units].map((u) => m.units[u]!.section) }));
+  return { unmet, push };
 }
 
 /**
@@ -137,41 +144,14 @@ export function solveBalancePlan(
   listeningPointId: string,
   targets?: Partial<BalanceTargets> | null,
   setLabels?: readonly string[],
+  limits?: Partial<MusicalLimits> | null,
 ): BalancePlan {
-  const t = resolveTargets(targets);
-  const points = inputs.map((input) => pointResultAt(input, listeningPointId));
-  const m = buildPlanModel(inputs as AnalysisInput[], points, t, setLabels);
-  const U = m.units.length;
-  const change = unitChangeDb(m);
-  const lo = m.units.map((_, u) => change[u]![0]!);
-  const hi = m.units.map((_, u) => change[u]![change[u]!.length - 1]!);
-  const { x } = boundedLeastSquares(relaxation(m), new Array<number>(U).fill(0), lo, hi);
-  const rounded = m.units.map((unit, u) => {
-    let best = 0;
-    change[u]!.forEach((d, i) => {
-      if (Math.abs(d - x[u]!) < Math.abs(change[u]![best]! - x[u]!)) best = i;
-    });
-    return best + unit.kMin;
-  });
-  const k = polishSteps(m, change, rounded);
-
-  // What stays unmet, worst over the sets, and which way each section is pushed.
-  const { L, share } = levelsAtSteps(m, k);
-  const values = residualValues(m, L);
-  const unmetByKey = new Map<string, UnmetTarget & { units: Set<number> }>();
-  const push = new Array<number>(U).fill(0); // ∂(target cost)/∂(uniform shift)
-  m.residuals.forEach((res, i) => {
-    const v = values[i]!;
-    if (v <= 0) return;
-    for (const term of res.terms) m.groupUnits[term.group]!.forEach((u, j) => (push[u]! += 2 * v * term.coef * share[term.group]![j]!));
-    if (v <= UNMET_TOLERANCE_DB) return;
-    const seen = unmetByKey.get(res.key);
-    if (!seen || seen.shortDb < v) {
-      const units = new Set([...(seen?.units ?? []), ...res.units]);
-      unmetByKey.set(res.key, { kind: res.kind, shortDb: v, detail: res.describe(v), sections: [], units });
-    } else res.units.forEach((u) => seen.units.add(u));
-  });
-  const unmet = [...unmetByKey.values()].map(({ units, ...rest }) => ({ ...rest, sections: [...units].map((u) => m.units[u]!.section) }));
+  const p = planProblem(inputs, listeningPointId, targets, limits, setLabels);
+  const m = p.model;
+  const { k, cost, proven } = searchPlan(m, p.change);
+  const found = unmetAtSteps(m, k);
+  // With every check passing as written there is nothing to report: the plan's own targets (blend) rest.
+  const unmet = p.nothingToChange ? [] : found.unmet.map(({ units: _, ...rest }) => rest);
 
   const entries = m.units.map((unit, u): PlanEntryDetail => {
     const played: Dynamic = DYNAMICS[unit.base + k[u]!]!;
@@ -179,19 +159,21 @@ export function solveBalancePlan(
       section: unit.section,
       writtenDynamic: unit.writtenDynamic,
       playedDynamic: played,
-      changeDb: change[u]![k[u]! - unit.kMin]!,
+      changeDb: p.change[u]![k[u]! - unit.kMin]!,
       voice: unit.voice,
       performerIds: unit.performerIds,
+      kind: unit.kind,
+      solo: unit.solo,
     };
-    const involved = unmet.filter((x) => x.sections.includes(unit.section));
+    const involved = p.nothingToChange ? [] : found.unmet.filter((x) => x.units.includes(u));
     if (involved.length) {
       entry.unreachable = involved.map((x) => x.detail);
-      if (k[u] === unit.kMax && push[u]! < -1e-9) entry.atLimit = "fff";
-      if (k[u] === unit.kMin && push[u]! > 1e-9) entry.atLimit = "pp";
+      if (k[u] === unit.kMax && found.push[u]! < -1e-9) entry.atLimit = played;
+      if (k[u] === unit.kMin && found.push[u]! > 1e-9) entry.atLimit = played;
     }
     return entry;
   });
-  return { listeningPointId, entries, unmet };
+  return { listeningPointId, entries, unmet, cost, proven, nothingToChange: p.nothingToChange, limits: p.limits };
 }
 
 /** The balance plan of one set at one listening point: one entry per section that plays. */

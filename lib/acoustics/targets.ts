@@ -4,7 +4,7 @@ import { AcousticsInputError, requireInRange } from "./errors";
 import { VOICES, type Voice } from "./types";
 
 /** Bumped whenever the checks or the plan compute differently, so stored results are recomputed. */
-export const BALANCE_VERSION = "farfield-balance-4";
+export const BALANCE_VERSION = "farfield-balance-5";
 
 export interface BalanceTargets {
   /** melody-forward: the melody leads every other voice by at least this (dB). */

@@ -1,10 +1,11 @@
 // The balance plan of a phrase at a listening point: one plan over all the phrase's sets, with the
 // box mix and the checks of each set before (as played now) and after (the plan applied to the written).
-import "server-only";
+// (No "server-only" mark: the bench runs it too.)
 import { analyzeSet, applyPlan, checkBalance, solveBalancePlan, toJsonSafe } from "@/lib/acoustics";
 import type { AnalysisInput, PointResult } from "@/lib/acoustics/types";
 import { notFound } from "@/lib/http/errors";
 import { setInputs } from "./balance-inputs";
+import { limitsFor } from "./plan-limits";
 import type { ShowBalance } from "./show-context";
 
 function summary(input: AnalysisInput, point: PointResult, targets: ShowBalance["targets"]) {
@@ -27,7 +28,8 @@ export function phrasePlan(sb: ShowBalance, phraseId: string, listeningPointId: 
     const { played, written } = setInputs(sb.ctx, { order: s.order, positions: s.positions });
     return { played: { ...played, listeningPoints: lp }, written: { ...written, listeningPoints: lp } };
   });
-  const plan = solveBalancePlan(inputs.map((i) => i.written), point.id, sb.targets, sets.map((s) => s.number));
+  const limits = limitsFor(sb.show.planLimits, phrase.planLimits);
+  const plan = solveBalancePlan(inputs.map((i) => i.written), point.id, sb.targets, sets.map((s) => s.number), limits);
   const perSet = sets.map((s, n) => {
     const { played, written } = inputs[n]!;
     const after = applyPlan(written, plan.entries);
@@ -38,5 +40,5 @@ export function phrasePlan(sb: ShowBalance, phraseId: string, listeningPointId: 
       after: summary(after, analyzeSet(after).points[0]!, sb.targets),
     };
   });
-  return toJsonSafe({ phrase: { id: phrase.id, name: phrase.name }, listeningPointId, entries: plan.entries, unmet: plan.unmet, sets: perSet });
+  return toJsonSafe({ phrase: { id: phrase.id, name: phrase.name }, listeningPointId, entries: plan.entries, unmet: plan.unmet, cost: plan.cost, nothingToChange: plan.nothingToChange, limits, sets: perSet });
 }

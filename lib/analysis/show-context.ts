@@ -36,7 +36,7 @@ export async function loadShowBalance(show: Show) {
     instruments: (catalog?.instruments as InstrumentCatalog | undefined) ?? undefined,
   };
   const sets: ShowSet[] = setRows.map((s) => ({ ...s, positions: bySet.get(s.id) ?? [] }));
-  return { ctx, sets, roster, listeningPoints, targets: showTargets(show.checkTargets), music };
+  return { show, ctx, sets, roster, listeningPoints, targets: showTargets(show.checkTargets), music };
 }
 
 export type ShowBalance = Awaited<ReturnType<typeof loadShowBalance>>;

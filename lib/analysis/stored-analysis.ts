@@ -8,11 +8,14 @@ import { findStoredAnalysis, findStoredResult, markAnalysisCurrent, storeAnalysi
 import { loadSetContext } from "@/db/queries/set-context";
 import type { Show } from "@/db/schema";
 import { analyzeSet, checkBalance, solveBalancePlan, toJsonSafe } from "@/lib/acoustics";
+import type { MusicalLimits } from "@/lib/acoustics/plan-limits";
 import { BALANCE_VERSION } from "@/lib/acoustics/targets";
 import type { AnalysisInput, InstrumentCatalog } from "@/lib/acoustics/types";
 import { MODEL_VERSION } from "@/lib/acoustics/version";
 import { notFound } from "@/lib/http/errors";
+import { phraseAt } from "@/lib/music/voicing";
 import { setInputs } from "./balance-inputs";
+import { limitsFor } from "./plan-limits";
 import { showConditions } from "./set-input";
 import { showTargets } from "./show-targets";
 import { mixOf } from "./mix-answer";
@@ -26,10 +29,16 @@ export function balanceHash(played: AnalysisInput, written: AnalysisInput, targe
 }
 
 /** Mix, checks and plan of one set at one listening point, computed from the two inputs. */
-export function computeBalance(played: AnalysisInput, written: AnalysisInput, listeningPointId: string, targets: ReturnType<typeof showTargets>) {
+export function computeBalance(
+  played: AnalysisInput,
+  written: AnalysisInput,
+  listeningPointId: string,
+  targets: ReturnType<typeof showTargets>,
+  limits: MusicalLimits,
+) {
   const point = played.listeningPoints.find((l) => l.id === listeningPointId)!;
   const pr = analyzeSet({ ...played, listeningPoints: [point] }).points[0]!;
-  const plan = solveBalancePlan([{ ...written, listeningPoints: [point] }], listeningPointId, targets);
+  const plan = solveBalancePlan([{ ...written, listeningPoints: [point] }], listeningPointId, targets, undefined, limits);
   return toJsonSafe({ mix: mixOf(pr), checks: checkBalance(played, pr, targets), plan: plan.entries, planUnmet: plan.unmet });
 }
 
@@ -67,7 +76,8 @@ export async function storedAnalysis(
     },
     { order: set.order, positions: ctx.positions },
   );
-  const hash = balanceHash(played, written, targets, listeningPointId);
+  const limits = limitsFor(show.planLimits, phraseAt(ctx.music.phrases, set.order)?.planLimits);
+  const hash = balanceHash(played, written, { targets, limits }, listeningPointId);
   if (stored?.modelVersion === STORED_VERSION && stored.inputsHash === hash) {
     const kept = await findStoredResult(set.id, listeningPointId, hash);
     if (kept) {
@@ -75,7 +85,7 @@ export async function storedAnalysis(
       return { result: kept.result as StoredBalance, computedAt: kept.computedAt, reused: true };
     }
   }
-  const result = computeBalance(played, written, listeningPointId, targets);
+  const result = computeBalance(played, written, listeningPointId, targets, limits);
   const computedAt = await storeAnalysis({ setId: set.id, listeningPointId, inputsHash: hash, modelVersion: STORED_VERSION, result, ...revisions });
   return { result, computedAt, reused: false };
 }

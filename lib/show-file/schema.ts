@@ -2,6 +2,7 @@
 // show exported, imported and exported again gives the same document. Pure (zod).
 import { z } from "zod";
 import { DYNAMICS, VOICES } from "@/lib/acoustics/types";
+import { planLimitsSchema } from "@/lib/validation/plan-limits";
 
 export const SHOW_FILE_FORMAT = "farfield-show";
 export const SHOW_FILE_VERSION = 1;
@@ -26,6 +27,7 @@ export const showFileSchema = z
         groundFactor: finite.refine((v) => v >= 0 && v <= 1, "must be 0 to 1").nullable(),
       }),
       checkTargets: z.unknown().nullable(),
+      planLimits: planLimitsSchema.nullable().optional(),
     }),
     listeningPoints: z.array(z.object({ name: z.string().min(1).max(120), x: finite, y: finite, z: finite, order: z.number().int() })).max(50),
     performers: z
@@ -59,6 +61,7 @@ export const showFileSchema = z
           lastSet: setNumber,
           voices: z.array(z.object({ section: z.string().min(1).max(60), voice, writtenDynamic: dynamic, playedDynamic: dynamic.nullable() })),
           overrides: z.array(z.object({ label, voice, writtenDynamic: dynamic, playedDynamic: dynamic.nullable(), note: z.string().max(500) })),
+          planLimits: planLimitsSchema.nullable().optional(),
         }),
       )
       .max(500),

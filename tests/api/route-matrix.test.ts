@@ -86,6 +86,8 @@ const RULES: Record<string, Rule> = {
   "POST shows/[showId]/imports/[uploadId]/confirm": { roles: EDITORS, body: "none" },
   "GET shows/[showId]/targets": { roles: ALL },
   "PUT shows/[showId]/targets": { roles: DIRECTORS, body: "json" },
+  "GET shows/[showId]/plan-limits": { roles: ALL },
+  "PUT shows/[showId]/plan-limits": { roles: DIRECTORS, body: "json" },
   "GET shows/[showId]/rehearsal-plan": { roles: ALL },
   "POST shows/[showId]/rehearsal-plan": { roles: ALL, body: "json" },
   "POST shows/[showId]/rehearsal-plan/send": { roles: DIRECTORS, body: "json" },

@@ -48,7 +48,8 @@ describe("show timeline", () => {
     await page.screenshot({ path: path.join(SHOTS, "balance-music-adopted.png"), fullPage: true });
     await page.goto(`${APP_URL}/shows/${ids.showId}/timeline`);
     await page.getByRole("link", { name: "Set 7: Melody forward passes" }).waitFor({ timeout: 60_000 });
-    await expect(page.getByRole("link", { name: "Set 8: Melody forward passes" }).count()).resolves.toBe(1);
+    // Set 7A too; set 8 stays short within the four steps the phrase's limits allow (the plan says so).
+    await expect(page.getByRole("link", { name: "Set 7A: Melody forward passes" }).count()).resolves.toBe(1);
     await page.screenshot({ path: path.join(SHOTS, "balance-timeline-adopted.png"), fullPage: true });
     expect(problems.filter((p) => !p.includes("/sets/"))).toEqual([]);
   });
