@@ -31,6 +31,12 @@ export interface PlanUnit {
   kMax: number;
 }
 
+/** A level difference as a director reads it: whole dB, one decimal under 1 dB. */
+export function dbWords(db: number): string {
+  const a = Math.abs(db);
+  return `${a >= 1 ? Math.round(a).toFixed(0) : a.toFixed(1)} dB`;
+}
+
 /** Families planned as the battery and front ensemble. */
 const PERCUSSION_FAMILIES: readonly string[] = ["percussion", "keyboard", "amplified"];
 
@@ -54,7 +60,12 @@ export interface Residual {
   c: number;
   /** What the residual is about, for the report (same key across sets). */
   key: string;
-  describe: (shortDb: number) => string;
+  /** The set it is measured in ("" for a single unnamed set). */
+  set: string;
+  /** The state in a director's words at the raw value c + Σ coef · L: "the melody is 6 dB under the accompaniment". */
+  state: (rawDb: number) => string;
+  /** What the target asks: "it should lead every other voice by 3 dB". */
+  aim: string;
   /** Units the residual involves (for notes and limits). */
   units: number[];
 }
@@ -203,7 +214,7 @@ export function buildPlanModel(
       groups.push(list.map((p) => index.get(p)!));
       return groups.length - 1;
     };
-    const tag = setLabels?.[n] ? ` (set ${setLabels[n]})` : inputs.length > 1 ? ` (set ${n + 1} of ${inputs.length})` : "";
+    const set = setLabels?.[n] ?? (inputs.length > 1 ? `${n + 1} of ${inputs.length}` : "");
 
     // Melody lead over every other voice.
     const byVoice = groupBy(players, (p) => p.voice);
@@ -219,7 +230,13 @@ export function buildPlanModel(
           terms: [{ group: gv, coef: 1 }, { group: gm, coef: -1 }],
           c: t.melodyLeadDb,
           key: `melody-lead:${v}`,
-          describe: (s) => `The melody stays ${s.toFixed(1)} dB short of leading the ${v} by ${t.melodyLeadDb} dB${tag}.`,
+          set,
+          // raw = lead target − (melody − voice)
+          state: (raw) => {
+            const lead = t.melodyLeadDb - raw;
+            return lead < 0 ? `the melody is ${dbWords(-lead)} under the ${v}` : `the melody leads the ${v} by only ${dbWords(lead)}`;
+          },
+          aim: `the melody should lead every other voice by ${dbWords(t.melodyLeadDb)}`,
           units: [...groupUnits(gm), ...groupUnits(gv)],
         });
       }
@@ -239,7 +256,10 @@ export function buildPlanModel(
             terms: [{ group: high.g, coef: 1 }, { group: low.g, coef: -1 }],
             c: -t.pyramidToleranceDb,
             key: `pyramid:${family}:${low.r}:${high.r}`,
-            describe: (s) => `In the ${family === "brass" ? "brass" : "woodwinds"}, the ${low.r} register stays ${s.toFixed(1)} dB too far below the ${high.r}${tag}.`,
+            set,
+            // raw = (high − low) − tolerance
+            state: (raw) => `in the ${family === "brass" ? "brass" : "woodwinds"}, the ${low.r} register is ${dbWords(raw + t.pyramidToleranceDb)} under the ${high.r}`,
+            aim: "the lower voices should be at least as present as the higher ones",
             units: [...groupUnits(low.g), ...groupUnits(high.g)],
           });
         }
@@ -259,7 +279,10 @@ export function buildPlanModel(
             terms: [{ group: a.g, coef: 1 }, { group: b.g, coef: -1 }],
             c: -t.blendToleranceDb,
             key: `blend:${voice}:${a.section}:${b.section}`,
-            describe: (s) => `In the ${voice}, the ${a.section} stay ${s.toFixed(1)} dB louder than the ${b.section} beyond the blend tolerance of ${t.blendToleranceDb} dB${tag}.`,
+            set,
+            // raw = (a − b) − tolerance
+            state: (raw) => `in the ${voice}, the ${a.section} are ${dbWords(raw + t.blendToleranceDb)} over the ${b.section}`,
+            aim: `sections sharing a part should sit within ${dbWords(t.blendToleranceDb)} of each other`,
             units: [...groupUnits(a.g), ...groupUnits(b.g)],
           });
         }
@@ -342,9 +365,9 @@ export function targetCost(m: PlanModel, L: ArrayLike<number>): number {
   return cost;
 }
 
-/** Value of each target residual (dB, ≥ 0) at the given group levels. */
-export function residualValues(m: PlanModel, L: ArrayLike<number>): number[] {
-  return m.residuals.map((r) => Math.max(0, r.terms.reduce((s, t) => s + t.coef * L[t.group]!, r.c)));
+/** Raw value c + Σ coef · L of each target residual at the given group levels (missed where > 0). */
+export function rawResiduals(m: PlanModel, L: ArrayLike<number>): number[] {
+  return m.residuals.map((r) => r.terms.reduce((s, t) => s + t.coef * L[t.group]!, r.c));
 }
 
 /** Each unit's level change at the point (dB, energy over all its players and sets) at each step kMin…kMax. */

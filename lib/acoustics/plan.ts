@@ -6,7 +6,7 @@ import { checkBalance } from "./checks";
 import { AcousticsInputError } from "./errors";
 import { createSetEvaluator } from "./evaluator";
 import { resolveLimits, type MusicalLimits } from "./plan-limits";
-import { buildPlanModel, levelsAtSteps, residualValues, sharesOf, unitChangeDb, type PlanModel, type TargetKind } from "./plan-model";
+import { buildPlanModel, levelsAtSteps, rawResiduals, sharesOf, unitChangeDb, type PlanModel, type Residual, type TargetKind } from "./plan-model";
 import { costAtSteps, searchPlan } from "./plan-search";
 import { resolveTargets, type BalanceTargets } from "./targets";
 import { DYNAMICS, type AnalysisInput, type Dynamic, type PlanEntry, type Voice } from "./types";
@@ -26,14 +26,27 @@ export interface PlanEntryDetail extends PlanEntry {
   atLimit?: Dynamic;
   /** Targets involving this section that the plan cannot meet. */
   unreachable?: string[];
+  /** Why the section changes (set only where it does). */
+  reason?: PlanReason;
 }
+
+/** What a change serves, in a director's words (the words layer adds the listening point and the section). */
+export type PlanReason =
+  | { kind: TargetKind; key: string; /** As written: "the melody is 6 dB under the accompaniment". */ state: string; aim: string; set: string }
+  /** The change keeps the written shape with the sections that move for a target. */
+  | { kind: "shape" };
 
 export interface UnmetTarget {
   kind: TargetKind;
   /** Identifies the target (the same across sets). */
   key: string;
   shortDb: number;
+  /** "The melody leads the percussion by only 1 dB (set 4); the melody should lead every other voice by 3 dB." */
   detail: string;
+  /** The parts of detail: with the plan, the state; the target; the set. */
+  state: string;
+  aim: string;
+  set: string;
   sections: string[];
 }
 
@@ -114,25 +127,69 @@ export function planCost(
   return costAtSteps(p.model, p.change, p.stepsOf(entries));
 }
 
+const capital = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
+const setTag = (set: string) => (set ? ` (set ${set})` : "");
+
 /** Targets missed by more than the tolerance at steps k, worst over the sets, with the units involved. */
 export function unmetAtSteps(m: PlanModel, k: readonly number[]) {
   const share = sharesOf(m);
-  const values = residualValues(m, levelsAtSteps(m, k, share));
+  const raw = rawResiduals(m, levelsAtSteps(m, k, share));
   const push = new Array<number>(m.units.length).fill(0); // ∂(target cost)/∂(uniform shift of the unit)
-  const byKey = new Map<string, UnmetTarget & { units: Set<number> }>();
+  const byKey = new Map<string, { res: Residual; v: number; units: Set<number> }>();
   m.residuals.forEach((res, i) => {
-    const v = values[i]!;
+    const v = raw[i]!;
     if (v <= 0) return;
     for (const term of res.terms) m.groupUnits[term.group]!.forEach((u, j) => (push[u]! += 2 * v * term.coef * share[term.group]![j]!));
     if (v <= UNMET_TOLERANCE_DB) return;
     const seen = byKey.get(res.key);
-    if (!seen || seen.shortDb < v) {
-      const units = new Set([...(seen?.units ?? []), ...res.units]);
-      byKey.set(res.key, { kind: res.kind, key: res.key, shortDb: v, detail: res.describe(v), sections: [], units });
-    } else res.units.forEach((u) => seen.units.add(u));
+    const units = new Set([...(seen?.units ?? []), ...res.units]);
+    if (!seen || seen.v < v) byKey.set(res.key, { res, v, units });
+    else res.units.forEach((u) => seen.units.add(u));
   });
-  const unmet = [...byKey.values()].map(({ units, ...rest }) => ({ ...rest, units: [...units], sections: [...units].map((u) => m.units[u]!.section) }));
+  const unmet = [...byKey.values()].map(({ res, v, units }) => {
+    const state = res.state(v);
+    return {
+      kind: res.kind,
+      key: res.key,
+      shortDb: v,
+      detail: `${capital(state)}${setTag(res.set)}; ${res.aim}.`,
+      state,
+      aim: res.aim,
+      set: res.set,
+      units: [...units],
+      sections: [...units].map((u) => m.units[u]!.section),
+    };
+  });
   return { unmet, push };
+}
+
+/**
+ * Why each changed unit changes: of the targets it takes part in, the one its change helps most (the plan
+ * with that unit back at its written dynamic misses it by more), described as written; "shape" when no
+ * target gains, so the change only keeps the written shape with sections that moved.
+ */
+function reasonsAtSteps(m: PlanModel, k: readonly number[]): (PlanReason | undefined)[] {
+  const written = rawResiduals(m, levelsAtSteps(m, m.units.map(() => 0)));
+  const planned = rawResiduals(m, levelsAtSteps(m, k));
+  const sq = (v: number) => (v > 0 ? v * v : 0);
+  return m.units.map((_, u) => {
+    if (k[u] === 0) return undefined;
+    const back = [...k];
+    back[u] = 0;
+    const without = rawResiduals(m, levelsAtSteps(m, back));
+    let best = -1;
+    let gain = 1e-9;
+    m.residuals.forEach((res, i) => {
+      const g = sq(without[i]!) - sq(planned[i]!);
+      if (res.units.includes(u) && g > gain) {
+        gain = g;
+        best = i;
+      }
+    });
+    if (best < 0) return { kind: "shape" };
+    const res = m.residuals[best]!;
+    return { kind: res.kind, key: res.key, state: res.state(written[best]!), aim: res.aim, set: res.set };
+  });
 }
 
 /**
@@ -150,8 +207,9 @@ export function solveBalancePlan(
   const m = p.model;
   const { k, cost, proven } = searchPlan(m, p.change);
   const found = unmetAtSteps(m, k);
+  const reasons = reasonsAtSteps(m, k);
   // With every check passing as written there is nothing to report: the plan's own targets (blend) rest.
-  const unmet = p.nothingToChange ? [] : found.unmet.map(({ units: _, ...rest }) => rest);
+  const unmet: UnmetTarget[] = p.nothingToChange ? [] : found.unmet.map(({ units: _, ...rest }) => rest);
 
   const entries = m.units.map((unit, u): PlanEntryDetail => {
     const played: Dynamic = DYNAMICS[unit.base + k[u]!]!;
@@ -165,6 +223,8 @@ export function solveBalancePlan(
       kind: unit.kind,
       solo: unit.solo,
     };
+    const reason = reasons[u];
+    if (reason) entry.reason = reason;
     const involved = p.nothingToChange ? [] : found.unmet.filter((x) => x.units.includes(u));
     if (involved.length) {
       entry.unreachable = involved.map((x) => x.detail);

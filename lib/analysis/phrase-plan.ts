@@ -1,10 +1,13 @@
-// The balance plan of a phrase at a listening point: one plan over all the phrase's sets, with the
-// box mix and the checks of each set before (as played now) and after (the plan applied to the written).
+// The balance plan of a phrase at a listening point: one plan over all the phrase's sets, in the director's
+// words, with the box mix and the checks of each set before (as played now) and after (the plan applied to
+// the written). The music page, the rehearsal plan and its e-mail all read this one.
 // (No "server-only" mark: the bench runs it too.)
 import { analyzeSet, applyPlan, checkBalance, solveBalancePlan, toJsonSafe } from "@/lib/acoustics";
+import { catalogOf } from "@/lib/acoustics/box-players";
 import type { AnalysisInput, PointResult } from "@/lib/acoustics/types";
 import { notFound } from "@/lib/http/errors";
 import { setInputs } from "./balance-inputs";
+import { advisePlan, unmetWords } from "./plan-advice";
 import { limitsFor } from "./plan-limits";
 import type { ShowBalance } from "./show-context";
 
@@ -40,5 +43,20 @@ export function phrasePlan(sb: ShowBalance, phraseId: string, listeningPointId: 
       after: summary(after, analyzeSet(after).points[0]!, sb.targets),
     };
   });
-  return toJsonSafe({ phrase: { id: phrase.id, name: phrase.name }, listeningPointId, entries: plan.entries, unmet: plan.unmet, cost: plan.cost, nothingToChange: plan.nothingToChange, limits, sets: perSet });
+  const catalog = catalogOf(sb.ctx);
+  const roster = new Map(sb.roster.map((p) => [p.id, { label: p.label, spec: catalog[p.instrument] }]));
+  const words = { pointName: point.name, performer: (id: string) => roster.get(id), limits };
+  return toJsonSafe({
+    phrase: { id: phrase.id, name: phrase.name },
+    listeningPointId,
+    listeningPointName: point.name,
+    entries: advisePlan(plan.entries, words),
+    unmet: plan.unmet.map((u) => ({ ...u, detail: unmetWords(u, words) })),
+    cost: plan.cost,
+    nothingToChange: plan.nothingToChange,
+    limits,
+    sets: perSet,
+  });
 }
+
+export type PhrasePlan = ReturnType<typeof phrasePlan>;

@@ -1,4 +1,5 @@
 // The stadium rehearsal plan as a message to the staff. Pure.
+import { CHECK_LABELS } from "@/lib/music/check-labels";
 import type { RehearsalItem } from "@/lib/rehearsal/plan";
 import { escapeHtml, layout, linkButton, paragraphs } from "./html";
 import { absoluteLink, type MailMessage } from "./message";
@@ -17,22 +18,27 @@ const SOURCE_WORDS = { adopted: "adopted plan", proposed: "proposed", written: "
 
 function itemText(it: RehearsalItem, n: number): string {
   const lines = [`${n}. ${it.name} (sets ${it.sets.join(", ")})`];
-  lines.push(it.failing.length ? `   Failing: ${it.failing.map((f) => `${f.id} (sets ${f.sets.join(", ")})`).join("; ")}` : "   Every balance check passes.");
+  lines.push(it.failing.length ? `   Failing: ${it.failing.map((f) => `${CHECK_LABELS[f.id]} (sets ${f.sets.join(", ")})`).join("; ")}` : "   Every balance check passes.");
   for (const s of it.buildUp) lines.push(`   Step ${s.step}, ${s.title.toLowerCase()}: ${s.sections.join(", ")}`);
-  for (const d of it.dynamics) lines.push(`   ${d.section}: written ${d.written}, play ${d.play} (${SOURCE_WORDS[d.source]})`);
+  for (const d of it.dynamics) lines.push(`   ${d.who}: written ${d.written}, play ${d.play} (${SOURCE_WORDS[d.source]})`);
+  const why = it.dynamics.filter((d) => d.why);
+  if (why.length) lines.push("   Why:", ...why.map((d) => `   - ${d.why}`));
+  for (const u of it.unmet) lines.push(`   Not reachable within the limits: ${u}`);
   return lines.join("\n");
 }
 
 function itemHtml(it: RehearsalItem, n: number): string {
   const steps = it.buildUp.map((s) => `<li>${escapeHtml(s.title)}: ${escapeHtml(s.sections.join(", "))}</li>`).join("");
   const dyn = it.dynamics
-    .map((d) => `<tr><td style="padding:2px 8px 2px 0">${escapeHtml(d.section)}</td><td style="padding:2px 8px">${d.written}</td><td style="padding:2px 8px"><strong>${d.play}</strong></td><td style="padding:2px 0;color:#6b7280">${SOURCE_WORDS[d.source]}</td></tr>`)
+    .map((d) => `<tr><td style="padding:2px 8px 2px 0">${escapeHtml(d.who)}</td><td style="padding:2px 8px">${d.written}</td><td style="padding:2px 8px"><strong>${d.play}</strong></td><td style="padding:2px 0;color:#6b7280">${SOURCE_WORDS[d.source]}</td></tr>`)
     .join("");
-  const failing = it.failing.length ? it.failing.map((f) => `${escapeHtml(f.id)} (sets ${escapeHtml(f.sets.join(", "))})`).join("; ") : "every balance check passes";
+  const failing = it.failing.length ? it.failing.map((f) => `${escapeHtml(CHECK_LABELS[f.id] ?? "")} (sets ${escapeHtml(f.sets.join(", "))})`).join("; ") : "every balance check passes";
+  const why = it.dynamics.filter((d) => d.why).map((d) => `<li>${escapeHtml(d.why)}</li>`).join("");
+  const unmet = it.unmet.map((u) => `<li>${escapeHtml(u)}</li>`).join("");
   return `<h3 style="margin:18px 0 6px;font-size:16px">${n}. ${escapeHtml(it.name)}</h3>
 <p style="margin:0 0 6px;color:#6b7280">Sets ${escapeHtml(it.sets.join(", "))} · failing: ${failing}</p>
 <ol style="margin:0 0 8px 18px;padding:0">${steps}</ol>
-<table style="border-collapse:collapse;font-size:14px"><tr><th align="left">Section</th><th align="left" style="padding:0 8px">Written</th><th align="left" style="padding:0 8px">Play</th><th></th></tr>${dyn}</table>`;
+<table style="border-collapse:collapse;font-size:14px"><tr><th align="left">Section</th><th align="left" style="padding:0 8px">Written</th><th align="left" style="padding:0 8px">Play</th><th></th></tr>${dyn}</table>${why ? `<ul style="margin:6px 0 0 18px;padding:0;font-size:14px">${why}</ul>` : ""}${unmet ? `<p style="margin:6px 0 0;font-size:14px">Not reachable within the limits:</p><ul style="margin:0 0 0 18px;padding:0;font-size:14px">${unmet}</ul>` : ""}`;
 }
 
 export function rehearsalMessage(input: RehearsalMessageInput): MailMessage {

@@ -18,6 +18,18 @@ export interface RehearsalItemInput {
   sets: SetAnalysis[];
   /** Each section's voice in the item (its phrase), with the adopted played dynamic if any. */
   sections: { section: string; voice: VoiceOrTacet; writtenDynamic: Dynamic; playedDynamic: Dynamic | null }[];
+  /** The phrase's balance plan in the director's words (lib/analysis/phrase-plan.ts), rows in score order; items outside any phrase have none. */
+  plan?: { entries: PlannedRow[]; unmet: string[] };
+}
+
+export interface PlannedRow {
+  section: string;
+  who: string;
+  why: string;
+  writtenDynamic: Dynamic;
+  playedDynamic: Dynamic;
+  /** Null where the stored JSON had no finite value. */
+  changeDb: number | null;
 }
 
 export interface BuildUpStep {
@@ -29,6 +41,10 @@ export interface BuildUpStep {
 
 export interface DynamicLine {
   section: string;
+  /** The row's name: the section, or "Trumpets soloist (T1)". */
+  who: string;
+  /** Why the plan changes it, in a sentence; "" where it plays as written. */
+  why: string;
   voice: VoiceOrTacet;
   written: Dynamic;
   play: Dynamic;
@@ -91,16 +107,29 @@ export function buildItem(input: RehearsalItemInput): RehearsalItem {
   const buildUp = STEPS.map((st) => ({ title: st.title, sections: sounding.filter((s) => st.voices.includes(s.voice)).map((s) => s.section).sort() }))
     .filter((st) => st.sections.length)
     .map((st, i) => ({ step: i + 1, ...st }));
-  const proposed = new Map((worstSet(input.sets)?.plan ?? []).map((p) => [p.section, p]));
-  const order: VoiceOrTacet[] = ["melody", "countermelody", "accompaniment", "bass", "percussion"];
-  const dynamics = sounding
-    .map((s): DynamicLine => {
-      if (s.playedDynamic) return { section: s.section, voice: s.voice, written: s.writtenDynamic, play: s.playedDynamic, source: "adopted", changeDb: null };
-      const p = proposed.get(s.section);
-      if (p && p.playedDynamic !== s.writtenDynamic) return { section: s.section, voice: s.voice, written: s.writtenDynamic, play: p.playedDynamic, source: "proposed", changeDb: p.changeDb };
-      return { section: s.section, voice: s.voice, written: s.writtenDynamic, play: s.writtenDynamic, source: "written", changeDb: null };
-    })
-    .sort((a, b) => order.indexOf(a.voice) - order.indexOf(b.voice) || a.section.localeCompare(b.section));
+  // The phrase's plan; a set outside any phrase falls back to its own set's plan.
+  const planned = new Map<string, Partial<PlannedRow> & Pick<PlannedRow, "playedDynamic">>(
+    (input.plan?.entries ?? worstSet(input.sets)?.plan ?? []).map((p) => [p.section, p]),
+  );
+  const line = (s: (typeof sounding)[number], play: Dynamic, source: DynamicLine["source"], changeDb: number | null, why: string): DynamicLine => ({
+    section: s.section,
+    who: planned.get(s.section)?.who ?? s.section,
+    why,
+    voice: s.voice,
+    written: s.writtenDynamic,
+    play,
+    source,
+    changeDb,
+  });
+  const dynamics = sounding.map((s): DynamicLine => {
+    const p = planned.get(s.section);
+    if (s.playedDynamic) return line(s, s.playedDynamic, "adopted", null, p?.playedDynamic === s.playedDynamic ? (p.why ?? "") : "");
+    if (p && p.playedDynamic !== s.writtenDynamic) return line(s, p.playedDynamic, "proposed", p.changeDb ?? null, p.why ?? "");
+    return line(s, s.writtenDynamic, "written", null, "");
+  });
+  // Score order: the plan's rows come in it (woodwinds, brass, battery, front ensemble); others after, by name.
+  const rank = new Map([...planned.keys()].map((section, i) => [section, i]));
+  dynamics.sort((a, b) => (rank.get(a.section) ?? rank.size) - (rank.get(b.section) ?? rank.size) || a.section.localeCompare(b.section));
   return {
     kind: input.kind,
     name: input.name,
@@ -109,7 +138,7 @@ export function buildItem(input: RehearsalItemInput): RehearsalItem {
     failing: [...failing.values()],
     buildUp,
     dynamics,
-    unmet: [...new Set(input.sets.flatMap((s) => s.planUnmet.map((u) => u.detail)))],
+    unmet: input.plan ? input.plan.unmet : [...new Set(input.sets.flatMap((s) => s.planUnmet.map((u) => u.detail)))],
   };
 }
 

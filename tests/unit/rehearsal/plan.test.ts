@@ -54,3 +54,22 @@ describe("buildRehearsalPlan", () => {
     expect(d.Flutes).toBeUndefined();
   });
 });
+
+describe("buildRehearsalPlan with the phrase's plan", () => {
+  const row = (section: string, playedDynamic: any, why: string, who = section) => ({ section, who, why, writtenDynamic: "mf" as const, playedDynamic, changeDb: why ? 5 : 0 });
+  const phrasePlan = {
+    // The plan's rows come in score order: woodwinds, brass, battery.
+    entries: [row("Clarinets", "f", "Clarinets: play f where p is written — clarinets carry poorly outdoors, and …"), row("Horns", "mp", ""), row("Trumpets", "mf", "", "Trumpets soloist (T1)"), row("Tubas", "f", ""), row("Snares", "mp", "Snares: play mp where mf is written — …")],
+    unmet: ["The melody leads the percussion by only 1 dB at the Press box in set 5; the melody should lead every other voice by 3 dB."],
+  };
+  const [item] = buildRehearsalPlan([{ kind: "phrase", name: "Loud", sets: [set("5", [fail("melody-forward")], [{ section: "Trumpets", writtenDynamic: "mf", playedDynamic: "ff", changeDb: 8 }])], sections, plan: phrasePlan }]);
+
+  it("lists the sections in the plan's score order, named and explained as on the music page, not by the worst set's own plan", () => {
+    expect(item!.dynamics.map((d) => d.who)).toEqual(["Clarinets", "Horns", "Trumpets soloist (T1)", "Tubas", "Snares"]);
+    const d = Object.fromEntries(item!.dynamics.map((x) => [x.section, x]));
+    expect(d.Clarinets).toMatchObject({ play: "f", source: "proposed", why: phrasePlan.entries[0]!.why });
+    expect(d.Trumpets).toMatchObject({ play: "mf", source: "written", why: "" });
+    expect(d.Horns).toMatchObject({ play: "f", source: "adopted", why: "" });
+    expect(item!.unmet).toEqual(phrasePlan.unmet);
+  });
+});

@@ -7,6 +7,7 @@ import { Button } from "@/components/Button";
 import { Card } from "@/components/Card";
 import { sendJson } from "@/components/fetcher";
 import { useApi } from "@/components/use-api";
+import { LimitsForm } from "./LimitsForm";
 import type { MusicPhrase, PhrasePlanResponse } from "./music-types";
 import { CHECK_LABELS, formatDb } from "./voices";
 
@@ -24,7 +25,8 @@ export function PlanPanel({ showId, phrase, canAdopt, listeningPoints }: { showI
     try {
       const body = method === "POST" ? { listeningPointId: pointId, entries: plan.data.entries.map((e) => ({ section: e.section, playedDynamic: e.playedDynamic })) } : undefined;
       await sendJson(`${base}/phrases/${phrase.id}/plan`, method, body);
-      await Promise.all([mutate(`${base}/music`), mutate((k) => typeof k === "string" && (k.includes("/timeline") || k.includes("/analysis")))]);
+      // The plan's own "as played now" lines read the adopted dynamics: reload it with the rest.
+      await Promise.all([mutate(`${base}/music`), mutate((k) => typeof k === "string" && (k.includes("/timeline") || k.includes("/analysis") || k.includes("/plan")))]);
       setStatus(method === "POST" ? "Plan adopted: every analysis now uses these played dynamics. The written ones are kept." : "Back to the written dynamics.");
     } catch (e) {
       setStatus(e instanceof Error ? e.message : "That did not work.");
@@ -45,8 +47,9 @@ export function PlanPanel({ showId, phrase, canAdopt, listeningPoints }: { showI
       }
     >
       <p className="mb-3 text-sm text-ink-soft">
-        Suggested played dynamics that best meet the balance targets at this listening point over the whole phrase, staying as close to what is written as they can. Predictions are estimates, not measurements.
+        Suggested played dynamics that best meet the balance targets at this listening point over the whole phrase, within the musical limits below and as close to what is written as they can. Predictions are estimates, not measurements.
       </p>
+      {plan.data?.nothingToChange ? <p className="mb-3 font-semibold text-signal-ok">Every balance check passes as written: nothing to change.</p> : null}
       {plan.error ? <p role="alert" className="text-signal-bad">{plan.error.message}</p> : null}
       {!plan.data ? <p>Working out the plan…</p> : (
         <>
@@ -59,21 +62,18 @@ export function PlanPanel({ showId, phrase, canAdopt, listeningPoints }: { showI
                   <th scope="col" className="py-2 pr-3">Written</th>
                   <th scope="col" className="py-2 pr-3">Play</th>
                   <th scope="col" className="py-2 pr-3">Change at the box</th>
-                  <th scope="col" className="py-2 pr-3">Notes</th>
+                  <th scope="col" className="py-2 pr-3">Why</th>
                 </tr>
               </thead>
               <tbody>
                 {plan.data.entries.map((e) => (
                   <tr key={e.section} className="border-b border-ink/5 align-top">
-                    <th scope="row" className="py-1 pr-3 font-medium">{e.section}</th>
+                    <th scope="row" className="py-1 pr-3 font-medium">{e.who}</th>
                     <td className="py-1 pr-3">{e.voice}</td>
                     <td className="py-1 pr-3">{e.writtenDynamic}</td>
                     <td className={`py-1 pr-3 font-semibold ${e.playedDynamic !== e.writtenDynamic ? "text-turf-dark" : ""}`}>{e.playedDynamic}</td>
                     <td className="py-1 pr-3 tabular-nums">{formatDb(e.changeDb, true)} dB</td>
-                    <td className="py-1 pr-3 text-sm">
-                      {e.atLimit ? <span className="font-semibold text-signal-warn">At the end of its range ({e.atLimit}). </span> : null}
-                      {e.unreachable?.join(" ")}
-                    </td>
+                    <td className={`py-1 pr-3 text-sm ${e.atLimit ? "text-signal-warn" : ""}`}>{e.why || "As written."}</td>
                   </tr>
                 ))}
               </tbody>
@@ -98,6 +98,7 @@ export function PlanPanel({ showId, phrase, canAdopt, listeningPoints }: { showI
               );
             })}
           </ul>
+          <LimitsForm showId={showId} phraseId={phrase.id} canEdit={canAdopt} inForce={plan.data.limits} />
           {canAdopt ? (
             <div className="mt-4 flex flex-wrap gap-3">
               <Button onClick={() => run("POST")}>Adopt this plan</Button>

@@ -20,14 +20,23 @@ export type PlanEntryDto = {
   changeDb: number;
   voice: string;
   performerIds: string[];
-  atLimit?: "pp" | "fff";
+  kind: "winds" | "percussion";
+  /** The row's name: the section, or "Trumpets soloist (T1)". */
+  who: string;
+  /** Why it changes, in a sentence; "" where it plays as written. */
+  why: string;
+  atLimit?: string;
   unreachable?: string[];
 };
+export type PlanLimits = { windSteps: number; percussionSteps: number; keepShape: boolean };
 export type MixSummary = { totalDbA: number | null; voices: Record<string, { dbA: number | null }>; sections: Record<string, { dbA: number | null }>; checks: CheckDto[] };
 export type PhrasePlanResponse = {
   phrase: { id: string; name: string };
   listeningPointId: string;
+  listeningPointName: string;
   entries: PlanEntryDto[];
   unmet: { kind: string; shortDb: number; detail: string; sections: string[] }[];
+  nothingToChange: boolean;
+  limits: PlanLimits;
   sets: { setId: string; number: string; before: MixSummary; after: MixSummary }[];
 };

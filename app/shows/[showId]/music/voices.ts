@@ -15,14 +15,7 @@ export const VOICE_LABELS: Record<string, string> = {
   percussion: "Percussion",
   tacet: "Tacet",
 };
-export const CHECK_LABELS: Record<string, string> = {
-  "melody-forward": "Melody forward",
-  "bass-up-pyramid": "Bass-up pyramid",
-  "depth-support": "Depth support",
-  "wide-form-edges": "Wide-form edges",
-  "stand-outs": "Stand-outs",
-  "arrival-spread": "Arrival spread",
-};
+export { CHECK_LABELS } from "@/lib/music/check-labels";
 export const DYNAMIC_ORDER = ["pp", "p", "mp", "mf", "f", "ff", "fff"] as const;
 export const VOICE_ORDER = ["melody", "countermelody", "accompaniment", "bass", "percussion", "tacet"] as const;
 

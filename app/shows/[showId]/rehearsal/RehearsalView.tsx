@@ -13,6 +13,7 @@ import { ROLE_WORDS } from "@/components/RoleBadge";
 import { useApi } from "@/components/use-api";
 import { ShowNav } from "@/components/ShowNav";
 import type { Role } from "@/lib/auth/permissions";
+import { CHECK_LABELS } from "@/lib/music/check-labels";
 import type { RehearsalItem } from "@/lib/rehearsal/plan";
 
 type Options = {
@@ -25,14 +26,6 @@ type Options = {
 };
 type Plan = { programName: string; listenFrom: { name: string; words: string }; items: RehearsalItem[] };
 
-const CHECK_WORDS: Record<string, string> = {
-  "melody-forward": "Melody forward",
-  "bass-up-pyramid": "Bass-up pyramid",
-  "depth-support": "Depth support",
-  "wide-form-edges": "Wide-form edges",
-  "stand-outs": "Stand-outs",
-  "arrival-spread": "Arrival spread",
-};
 const SOURCE_WORDS = { adopted: "adopted plan", proposed: "proposed", written: "as written" } as const;
 
 export function RehearsalView({ showId, initial }: { showId: string; initial: { phraseIds: string[]; setIds: string[]; pointId: string | null } }) {
@@ -196,7 +189,7 @@ function PlanSheets({ plan, showName }: { plan: Plan; showName: string }) {
                 <ul className="mt-1 space-y-2 text-sm">
                   {it.failing.map((f) => (
                     <li key={f.id}>
-                      <span className="font-semibold">{CHECK_WORDS[f.id] ?? f.id}</span> (sets {f.sets.join(", ")}): {f.detail}
+                      <span className="font-semibold">{CHECK_LABELS[f.id]}</span> (sets {f.sets.join(", ")}): {f.detail}
                     </li>
                   ))}
                 </ul>
@@ -219,7 +212,7 @@ function PlanSheets({ plan, showName }: { plan: Plan; showName: string }) {
                 <tbody>
                   {it.dynamics.map((d) => (
                     <tr key={d.section} className="border-b border-ink/10">
-                      <td className="py-1 pr-2">{d.section}</td>
+                      <td className="py-1 pr-2">{d.who}</td>
                       <td className="py-1 pr-2">{d.voice}</td>
                       <td className="py-1 pr-2">{d.written}</td>
                       <td className="py-1 pr-2 font-bold">{d.play}</td>
@@ -231,7 +224,10 @@ function PlanSheets({ plan, showName }: { plan: Plan; showName: string }) {
                   ))}
                 </tbody>
               </table>
-              {it.unmet.length ? <p className="mt-2 text-sm text-signal-bad">Not reachable within the instruments&apos; ranges: {it.unmet.join(" ")}</p> : null}
+              {it.dynamics.some((d) => d.why) ? (
+                <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">{it.dynamics.filter((d) => d.why).map((d) => <li key={d.section}>{d.why}</li>)}</ul>
+              ) : null}
+              {it.unmet.length ? <p className="mt-2 text-sm text-signal-bad">Not reachable within the limits: {it.unmet.join(" ")}</p> : null}
             </div>
           </div>
         </section>
