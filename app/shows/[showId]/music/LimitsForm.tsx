@@ -57,7 +57,7 @@ export function LimitsForm({ showId, phraseId, canEdit, inForce }: { showId: str
         <div className="mt-3 flex flex-wrap gap-3">
           <Button onClick={() => save({ phraseId, limits }, "Limits saved for this phrase.")}>Use for this phrase</Button>
           <Button variant="secondary" onClick={() => save({ limits }, "Limits saved for the whole show.")}>Use for the whole show</Button>
-          <Button variant="secondary" onClick={() => save({ phraseId, limits: null }, "This phrase now follows the show's limits.")}>Follow the show's limits</Button>
+          <Button variant="secondary" onClick={() => save({ phraseId, limits: null }, "This phrase now follows the show's limits.")}>Follow the show&apos;s limits</Button>
         </div>
       ) : (
         <p className="mt-2 text-ink-soft">Only the director can change the limits.</p>
