@@ -27,6 +27,22 @@ describe("rehearsal plan", () => {
     expect(res.body.listenFrom).toMatchObject({ name: "Press box", words: expect.stringContaining("in front of the front sideline") });
   });
 
+  it("gives each phrase the music page's plan: the same rows in score order, the same dynamics and the same words", async () => {
+    const phrase = options.phrases.find((p: any) => p.name === "Harbor theme");
+    const plan = (await ids.director.get(`/api/shows/${ids.showId}/phrases/${phrase.id}/plan?listeningPointId=${ids.pressBoxId}`)).body;
+    const res = await ids.director.post(`/api/shows/${ids.showId}/rehearsal-plan`, { phraseIds: [phrase.id], listeningPointId: ids.pressBoxId });
+    const item = res.body.items[0];
+    expect(item.dynamics.map((d: any) => d.section)).toEqual(plan.entries.map((e: any) => e.section));
+    const proposed = item.dynamics.filter((d: any) => d.source === "proposed");
+    expect(proposed.length).toBeGreaterThan(0);
+    for (const d of proposed) {
+      const e = plan.entries.find((x: any) => x.section === d.section);
+      expect(d).toMatchObject({ who: e.who, play: e.playedDynamic, why: e.why });
+      expect(d.why).toMatch(new RegExp(`^${e.who}: play ${e.playedDynamic} where ${e.writtenDynamic} is written — .+ at the Press box`));
+    }
+    expect(item.unmet).toEqual(plan.unmet.map((u: any) => u.detail));
+  });
+
   it("refuses an empty choice and ids of another show", async () => {
     expect((await ids.director.post(`/api/shows/${ids.showId}/rehearsal-plan`, { phraseIds: [] })).status).toBe(400);
     expect((await ids.director.post(`/api/shows/${ids.showId}/rehearsal-plan`, { setIds: ["00000000-0000-4000-8000-000000000000"] })).status).toBe(400);

@@ -99,7 +99,7 @@ export function ChecksPanel({
               <span className="text-right tabular-nums text-ink-soft">{formatDb(e.changeDb, true)} dB</span>
               {e.atLimit || e.unreachable?.length ? (
                 <span className="col-span-3 text-xs text-signal-warn">
-                  {e.atLimit ? `At the end of its range (${e.atLimit}). ` : null}
+                  {e.atLimit ? `Stops at ${e.atLimit} (the end of its range or the musical limits). ` : null}
                   {e.unreachable?.join(" ")}
                 </span>
               ) : null}
