@@ -10,7 +10,7 @@ export type ProgramResponse = { program: { id: string; name: string }; role: Rol
 export type ShowsResponse = { shows: { id: string; name: string }[] };
 
 export type FieldRules = "high-school" | "college";
-export type Conditions = { temperatureC: number; relativeHumidityPct: number; pressureKPa: number; groundFactor: number | null };
+export type Conditions = { temperatureC: number; relativeHumidityPct: number; pressureKPa: number; groundFactor: number | null; betweenGroundFactor?: number | null };
 export type ListeningPoint = { id: string; name: string; x: number; y: number; z: number };
 export type Performer = { id: string; label: string; instrument: string; section: string; part: string; strengthDb: number; name?: string | null };
 export type SetSummary = { id: string; number: string; counts: number; order: number };

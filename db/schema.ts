@@ -119,7 +119,10 @@ export const shows = pgTable(
     temperatureC: doublePrecision("temperature_c").notNull().default(20),
     relativeHumidityPct: doublePrecision("relative_humidity_pct").notNull().default(50),
     pressureKPa: doublePrecision("pressure_kpa").notNull().default(101.325),
+    /** ISO 9613-2 G of the field surface the performers stand on (null: no ground term). */
     groundFactor: doublePrecision("ground_factor"),
+    /** G of the ground between the field and the listening points (track, aprons); null: the field's. */
+    betweenGroundFactor: doublePrecision("between_ground_factor"),
     /** The director's thresholds for the balance checks; null keeps the defaults. */
     checkTargets: jsonb("check_targets"),
     /** The director's musical limits for the balance plan (lib/acoustics/plan-limits.ts); null keeps the defaults. */
@@ -137,6 +140,7 @@ export const shows = pgTable(
       "shows_conditions_in_range",
       sql`${t.temperatureC} between -50 and 60 and ${t.relativeHumidityPct} between 0 and 100 and ${t.pressureKPa} > 0 and ${t.pressureKPa} <= 200 and ${t.groundFactor} between 0 and 1`,
     ),
+    check("shows_between_ground_factor_range", sql`${t.betweenGroundFactor} between 0 and 1`),
   ],
 );
 export type Show = typeof shows.$inferSelect;
@@ -153,11 +157,17 @@ export const listeningPoints = pgTable(
     y: doublePrecision("y").notNull(),
     z: doublePrecision("z").notNull(),
     order: integer("order").notNull().default(0),
+    /** G of the ground around the point, e.g. 0 for concrete stands; null: the ground between. */
+    groundFactor: doublePrecision("ground_factor"),
+    /** How far (m) that ground reaches from the point toward the field. */
+    surroundingsM: doublePrecision("surroundings_m").notNull().default(0),
   },
   (t) => [
     index("listening_points_show_idx").on(t.showId),
     // Generous: a listening point within a kilometre of the 50, at most 100 m below or 1 km above the field.
     check("listening_points_in_range", sql`${t.x} between -1000 and 1000 and ${t.y} between -1000 and 1000 and ${t.z} between -100 and 1000`),
+    check("listening_points_ground_factor_range", sql`${t.groundFactor} between 0 and 1`),
+    check("listening_points_surroundings_range", sql`${t.surroundingsM} between 0 and 1000`),
   ],
 );
 export type ListeningPoint = typeof listeningPoints.$inferSelect;

@@ -13,7 +13,15 @@ export async function listShows(programId: string) {
 
 export async function listListeningPoints(showId: string) {
   return db
-    .select({ id: listeningPoints.id, name: listeningPoints.name, x: listeningPoints.x, y: listeningPoints.y, z: listeningPoints.z })
+    .select({
+      id: listeningPoints.id,
+      name: listeningPoints.name,
+      x: listeningPoints.x,
+      y: listeningPoints.y,
+      z: listeningPoints.z,
+      groundFactor: listeningPoints.groundFactor,
+      surroundingsM: listeningPoints.surroundingsM,
+    })
     .from(listeningPoints)
     .where(eq(listeningPoints.showId, showId))
     .orderBy(asc(listeningPoints.order), asc(listeningPoints.name));

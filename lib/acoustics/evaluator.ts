@@ -8,6 +8,7 @@ import { DEFAULT_INSTRUMENTS } from "./catalog";
 import { angleFromFacingDeg, directivityInto, type CompiledDirectivity } from "./directivity";
 import { AcousticsInputError } from "./errors";
 import { GROUND_TERM_COUNT, groundBandsInto, regionTermsInto } from "./ground";
+import { PATH_PIECES, pathGroundInto, regionGroundInto } from "./ground-regions";
 import { instrumentTables, type InstrumentTables } from "./instrument-tables";
 import { aWeightingDb } from "./weighting";
 import { DEFAULT_SOURCE_HEIGHT_M, validateConditions, validateListeningPoints, validatePerformers } from "./validate";
@@ -32,6 +33,8 @@ const TERMS = GROUND_TERM_COUNT;
 const directivityAt = directivityInto;
 const angleOf = angleFromFacingDeg;
 const groundAt = groundBandsInto;
+const pathGround = pathGroundInto;
+const regionGround = regionGroundInto;
 const DYNAMIC_INDEX = Object.fromEntries(DYNAMICS.map((d, i) => [d, i])) as Record<Dynamic, number>;
 
 /** Closer than this the point-source model does not hold; distances are clamped to it. */
@@ -78,6 +81,13 @@ interface EvaluatorState {
   N: number;
   S: number;
   g: number | null;
+  /** G of the ground between the field and the points, and of each point's surroundings (and how far they reach). */
+  gBetween: number;
+  gPoint: Float64Array;
+  surroundingsM: Float64Array;
+  pathCuts: Float64Array;
+  pathG: Float64Array;
+  regionG: Float64Array; // G_s, G_m, G_r of the current pair
   msPerM: number;
   alphaDbPerM: Float64Array;
   base: Float64Array; // Lw + carry + strength per performer and band
@@ -163,6 +173,7 @@ export function createSetEvaluator(input: AnalysisInput): SetEvaluator {
   }
 
   const S = sectionNames.length;
+  const gBetween = conditions.betweenGroundFactor ?? conditions.groundFactor ?? 0;
   const rcvTerms = new Float64Array(N * GROUND_TERM_COUNT);
   points.forEach((pt, i) => regionTermsInto(pt.z, rcvTerms, i * GROUND_TERM_COUNT));
   const st: EvaluatorState = {
@@ -170,6 +181,12 @@ export function createSetEvaluator(input: AnalysisInput): SetEvaluator {
     N,
     S,
     g: conditions.groundFactor,
+    gBetween,
+    gPoint: Float64Array.from(points, (pt) => pt.groundFactor ?? gBetween),
+    surroundingsM: Float64Array.from(points, (pt) => pt.surroundingsM ?? 0),
+    pathCuts: new Float64Array(PATH_PIECES + 1),
+    pathG: new Float64Array(PATH_PIECES),
+    regionG: new Float64Array(3),
     msPerM: 1000 / speedOfSound(conditions.temperatureC),
     alphaDbPerM: Float64Array.from(OCTAVE_BANDS, (b) => absorptionDbPerKmUnchecked(b.exactHz, conditions) / 1000),
     base,
@@ -240,7 +257,7 @@ function weightedDb(energy: Float64Array, offset: number): number {
 // A module-level function over one state shape (not a closure per evaluator), so the optimised
 // code is shared by every evaluator instead of being specialised to, and thrown away for, one.
 function evaluateState(st: EvaluatorState): MixBuffers {
-  const { P, N, S, g, msPerM, alphaDbPerM, base, z, srcTerms, rcvTerms, sectionOf, voiceOf, dirOf, x, y, facingDeg } = st;
+  const { P, N, S, g, gBetween, gPoint, surroundingsM, pathCuts, pathG, regionG, msPerM, alphaDbPerM, base, z, srcTerms, rcvTerms, sectionOf, voiceOf, dirOf, x, y, facingDeg } = st;
   const { lx, ly, lz, perfDb, perfEA, arrivalMs, sectionE, voiceE, totalE, fx, fy, dirDb, grDb, mix } = st;
   for (let p = 0; p < P; p++) {
     if (!Number.isFinite(x[p]) || !Number.isFinite(y[p]) || !Number.isFinite(facingDeg[p])) {
@@ -259,6 +276,8 @@ function evaluateState(st: EvaluatorState): MixBuffers {
     let minMs = Infinity;
     let maxMs = -Infinity;
     const rOff = n * TERMS;
+    // One kind of ground everywhere: no need to follow each path over the ground.
+    const uniform = g === null || (gBetween === g && gPoint[n] === g);
     for (let p = 0; p < P; p++) {
       const dx = lx[n] - x[p];
       const dy = ly[n] - y[p];
@@ -273,7 +292,14 @@ function evaluateState(st: EvaluatorState): MixBuffers {
       if (ms < minMs) minMs = ms;
       if (ms > maxMs) maxMs = ms;
       directivityAt(dirDb, dirOf[p], angleOf(fx[p], fy[p], dx, dy, r));
-      if (g !== null) groundAt(grDb, g, srcTerms, p * TERMS, rcvTerms, rOff, z[p] + lz[n], dp);
+      if (g !== null) {
+        if (uniform) groundAt(grDb, g, g, g, srcTerms, p * TERMS, rcvTerms, rOff, z[p] + lz[n], dp);
+        else {
+          pathGround(pathCuts, pathG, x[p], y[p], lx[n], ly[n], dp, g, gBetween, gPoint[n], surroundingsM[n]);
+          regionGround(regionG, 0, pathCuts, pathG, PATH_PIECES, z[p], lz[n], dp);
+          groundAt(grDb, regionG[0], regionG[1], regionG[2], srcTerms, p * TERMS, rcvTerms, rOff, z[p] + lz[n], dp);
+        }
+      }
       const common = -(20 * Math.log10(r) + 11); // ISO 9613-2 eq. (7)
       const pOff = (n * P + p) * B;
       const sOff = (n * S + sectionOf[p]) * B;

@@ -12,6 +12,7 @@ export {
 export { aWeightingDb } from "./weighting";
 export { sumLevelsDb, divergenceDb, dbToEnergy, energyToDb } from "./levels";
 export { groundAttenuationDb, type GroundQuery } from "./ground";
+export { regionGroundFactors, type RegionGroundFactors } from "./ground-regions";
 export { directivityDb } from "./directivity";
 export { DEFAULT_INSTRUMENTS, EVEREST_PEAK_LW_DB } from "./catalog";
 export { instrumentLevelDb, dynamicChangeDb, shiftDynamic, dynamicIndex } from "./instrument";

@@ -41,8 +41,13 @@ export interface Conditions {
   temperatureC: number;
   relativeHumidityPct: number;
   pressureKPa: number;
-  /** ISO 9613-2 ground factor G, 0 (hard) … 1 (porous), or null for no ground term. */
+  /**
+   * ISO 9613-2 ground factor G, 0 (hard) … 1 (porous), of the field surface the performers stand
+   * on; null for no ground term at all.
+   */
   groundFactor: number | null;
+  /** G of the ground between the field and the listening points (track, aprons); the field's when omitted or null. */
+  betweenGroundFactor?: number | null;
 }
 
 export interface PerformerInput {
@@ -64,6 +69,10 @@ export interface ListeningPointInput {
   x: number;
   y: number;
   z: number;
+  /** G of the ground around the point (e.g. 0 for concrete stands); the between ground when omitted or null. */
+  groundFactor?: number | null;
+  /** How far (m, on the ground) that ground reaches from the point toward the field; 0 when omitted. */
+  surroundingsM?: number;
 }
 
 export interface AnalysisInput {

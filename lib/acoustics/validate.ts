@@ -23,6 +23,8 @@ function requireUnique(ids: string[], field: string): void {
 export function validateConditions(conditions: Conditions): void {
   validateAir(conditions, "conditions.");
   if (conditions.groundFactor !== null) requireInRange(conditions.groundFactor, 0, 1, "conditions.groundFactor");
+  const between = conditions.betweenGroundFactor;
+  if (between !== undefined && between !== null) requireInRange(between, 0, 1, "conditions.betweenGroundFactor");
 }
 
 const VOICE_SET: ReadonlySet<string> = new Set<string>([...VOICES, "tacet"]);
@@ -68,6 +70,10 @@ export function validateListeningPoints(points: readonly ListeningPointInput[]):
     requireFinite(pt.x, `${f}.x`);
     requireFinite(pt.y, `${f}.y`);
     if (requireFinite(pt.z, `${f}.z`) < 0) throw new AcousticsInputError(`${f}.z`, "must not be negative");
+    if (pt.groundFactor !== undefined && pt.groundFactor !== null) requireInRange(pt.groundFactor, 0, 1, `${f}.groundFactor`);
+    if (pt.surroundingsM !== undefined && requireFinite(pt.surroundingsM, `${f}.surroundingsM`) < 0) {
+      throw new AcousticsInputError(`${f}.surroundingsM`, "must not be negative");
+    }
   });
   requireUnique(points.map((p) => p.id), "listeningPoints");
 }

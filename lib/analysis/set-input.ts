@@ -4,7 +4,15 @@ import { loadSetContext } from "@/db/queries/set-context";
 import type { Conditions, InstrumentCatalog } from "@/lib/acoustics/types";
 import { buildAnalysisInput } from "@/lib/music/analysis-input";
 
-type ShowRow = { id: string; programId: string; temperatureC: number; relativeHumidityPct: number; pressureKPa: number; groundFactor: number | null };
+type ShowRow = {
+  id: string;
+  programId: string;
+  temperatureC: number;
+  relativeHumidityPct: number;
+  pressureKPa: number;
+  groundFactor: number | null;
+  betweenGroundFactor: number | null;
+};
 
 export function showConditions(show: ShowRow): Conditions {
   return {
@@ -12,6 +20,7 @@ export function showConditions(show: ShowRow): Conditions {
     relativeHumidityPct: show.relativeHumidityPct,
     pressureKPa: show.pressureKPa,
     groundFactor: show.groundFactor,
+    betweenGroundFactor: show.betweenGroundFactor,
   };
 }
 

@@ -32,7 +32,13 @@ export async function loadShowBalance(show: Show) {
     music,
     listeningPoints,
     // The same fields as set-input.ts's showConditions, which is marked server-only.
-    conditions: { temperatureC: show.temperatureC, relativeHumidityPct: show.relativeHumidityPct, pressureKPa: show.pressureKPa, groundFactor: show.groundFactor },
+    conditions: {
+      temperatureC: show.temperatureC,
+      relativeHumidityPct: show.relativeHumidityPct,
+      pressureKPa: show.pressureKPa,
+      groundFactor: show.groundFactor,
+      betweenGroundFactor: show.betweenGroundFactor,
+    },
     instruments: (catalog?.instruments as InstrumentCatalog | undefined) ?? undefined,
   };
   const sets: ShowSet[] = setRows.map((s) => ({ ...s, positions: bySet.get(s.id) ?? [] }));

@@ -51,7 +51,7 @@ export function buildAnalysisInput(args: {
   });
   return {
     performers,
-    listeningPoints: args.listeningPoints.map(({ id, x, y, z }) => ({ id, x, y, z })),
+    listeningPoints: args.listeningPoints.map(({ id, x, y, z, groundFactor, surroundingsM }) => ({ id, x, y, z, groundFactor, surroundingsM })),
     conditions: args.conditions,
     ...(args.instruments ? { instruments: args.instruments } : {}),
   };

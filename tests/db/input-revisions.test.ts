@@ -58,6 +58,8 @@ describe("show-wide inputs move the show's revision", () => {
     ["a new performer", () => sql`insert into performers (show_id, label, instrument, section) values (${ids.show}, 'T2', 'trumpet', 'Trumpets')`],
     ["a performer's strength", () => sql`update performers set strength_db = 2 where id = ${ids.performer}`],
     ["a listening point moved", () => sql`update listening_points set z = 20 where id = ${ids.point}`],
+    ["the ground around a listening point", () => sql`update listening_points set ground_factor = 0, surroundings_m = 20 where id = ${ids.point}`],
+    ["the ground between the field and the listening points", () => sql`update shows set between_ground_factor = 0 where id = ${ids.show}`],
     ["a new phrase", () => sql`insert into phrases (show_id, name, "order", first_set_id, last_set_id) values (${ids.show}, 'Ballad', 1, ${ids.setB}, ${ids.setB})`],
     ["a voice assignment", () => sql`insert into voice_assignments (phrase_id, section, voice, written_dynamic) values (${ids.phrase}, 'Trumpets', 'melody', 'mf')`],
     ["a played dynamic adopted", () => sql`update voice_assignments set played_dynamic = 'f' where phrase_id = ${ids.phrase}`],

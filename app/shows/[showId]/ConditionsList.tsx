@@ -16,6 +16,7 @@ function Row({ term, value, note }: { term: string; value: string; note?: string
 
 export function ConditionsList({ conditions, fieldRules }: { conditions: Conditions; fieldRules: FieldRules }) {
   const ground = groundWords(conditions.groundFactor);
+  const between = groundWords(conditions.betweenGroundFactor ?? null);
   const rules = FIELD_RULES_WORDS[fieldRules];
   return (
     <dl>
@@ -23,10 +24,17 @@ export function ConditionsList({ conditions, fieldRules }: { conditions: Conditi
       <Row term="Humidity" value={`${conditions.relativeHumidityPct} %`} note="Dry air absorbs high frequencies more." />
       <Row term="Air pressure" value={`${conditions.pressureKPa} kPa`} />
       <Row
-        term="Ground"
+        term="Field surface"
         value={conditions.groundFactor === null ? ground.name : `${ground.name} (G = ${conditions.groundFactor})`}
         note={ground.meaning}
       />
+      {conditions.groundFactor !== null && conditions.betweenGroundFactor != null ? (
+        <Row
+          term="Between field and stands"
+          value={`${between.name} (G = ${conditions.betweenGroundFactor})`}
+          note={`${between.meaning} ISO 9613-2 7.3.1 gives the source, middle and receiver regions of each path their own ground.`}
+        />
+      ) : null}
       <Row term="Field rules" value={rules.name} note={rules.hashes} />
     </dl>
   );

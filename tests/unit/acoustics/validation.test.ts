@@ -58,6 +58,9 @@ describe("bad input: a clear error naming the field, never a NaN", () => {
 
   it("rejects a ground factor outside 0…1 and a bad pressure or temperature", () => {
     expect(() => analyzeSet({ ...good(), conditions: { ...AIR, groundFactor: 1.5 } })).toThrow("conditions.groundFactor must be between 0 and 1");
+    expect(() => analyzeSet({ ...good(), conditions: { ...AIR, groundFactor: 1, betweenGroundFactor: -0.1 } })).toThrow("conditions.betweenGroundFactor must be between 0 and 1");
+    expect(() => analyzeSet({ ...good(), listeningPoints: [{ ...BOX, groundFactor: 2 }] })).toThrow("listeningPoints[0].groundFactor must be between 0 and 1");
+    expect(() => analyzeSet({ ...good(), listeningPoints: [{ ...BOX, surroundingsM: -1 }] })).toThrow("listeningPoints[0].surroundingsM must not be negative");
     expect(() => analyzeSet({ ...good(), conditions: { ...AIR, pressureKPa: 0 } })).toThrow("conditions.pressureKPa");
     expect(() => analyzeSet({ ...good(), conditions: { ...AIR, temperatureC: Infinity } })).toThrow("conditions.temperatureC must be a finite number");
   });

@@ -17,6 +17,7 @@ export const GET = route<{ showId: string }>(async (_req, { showId }) => {
         relativeHumidityPct: show.relativeHumidityPct,
         pressureKPa: show.pressureKPa,
         groundFactor: show.groundFactor,
+        betweenGroundFactor: show.betweenGroundFactor,
       },
     },
     role,
