@@ -57,6 +57,10 @@ export interface CarryFit {
   determination: Record<string, Determination>;
   /** Pairs of instruments the readings cannot tell apart (always heard in the same proportion). */
   indistinguishable: [string, string][];
+  /** Readings minus fitted offsets: with 0 or fewer the fit can match any readings and checks nothing. */
+  degreesOfFreedom: number;
+  /** Spread of the readings about the fit, √(Σ residual² / degrees of freedom) in dB; null with no degrees of freedom. */
+  residualStdDb: number | null;
   iterations: number;
 }
 
@@ -168,7 +172,10 @@ export function fitCarryOffsets(options: FitCarryOptions): CarryFit {
   }
 
   const ssr = current.res.reduce((a, x) => a + x * x, 0);
-  const sigma = Math.max(R > K ? Math.sqrt(ssr / (R - K)) : 0, floorDb);
+  // The residual spread says how well the model fits only when there are more readings than
+  // offsets; otherwise the standard errors rest on the meter floor alone.
+  const residualStdDb = R > K ? Math.sqrt(ssr / (R - K)) : null;
+  const sigma = Math.max(residualStdDb ?? 0, floorDb);
   const covariance = inv(normalMatrix(current.jac)) as number[][];
   const determination: Record<string, Determination> = {};
   const offsetsDb: Record<string, number> = {};
@@ -201,6 +208,8 @@ export function fitCarryOffsets(options: FitCarryOptions): CarryFit {
     predictedAfterDb: current.pred,
     determination,
     indistinguishable,
+    degreesOfFreedom: R - K,
+    residualStdDb,
     iterations,
   };
 }

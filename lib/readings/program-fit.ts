@@ -104,6 +104,8 @@ export function fitView(pf: ProgramFit) {
     indistinguishable: fit?.indistinguishable ?? [],
     rmsBeforeDb: fit ? round2(rms(fit.predictedBeforeDb.map((p, i) => p - pf.used[i]!.measuredDb))) : null,
     rmsAfterDb: fit ? round2(rms(fit.residualsDb)) : null,
+    degreesOfFreedom: fit ? fit.degreesOfFreedom : null,
+    residualStdDb: fit?.residualStdDb != null ? round2(fit.residualStdDb) : null,
   };
 }
 

@@ -54,6 +54,8 @@ describe("catalog fit, adopt and restore", () => {
     const alone = mine.find((r: any) => r.sections.length === 1 && r.sections[0].section === "Tubas");
     expect(Math.abs(alone.predictedAfterDb - alone.measuredDb)).toBeLessThan(1.5);
     expect(fit.body.instruments.map((i: any) => i.key)).toEqual(Object.keys(fit.body.offsetsDb).sort());
+    // Degrees of freedom: readings used minus offsets fitted.
+    expect(fit.body.degreesOfFreedom).toBe(fit.body.readings.length - Object.keys(fit.body.offsetsDb).length);
     expect(fit.body.indistinguishable.flat()).not.toContain("tuba");
   });
 

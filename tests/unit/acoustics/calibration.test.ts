@@ -135,3 +135,24 @@ describe("fitCarryOffsets: bad input", () => {
     expect(() => applyCarryOffsets(DEFAULT_INSTRUMENTS, { kazoo: 1 })).toThrow(/kazoo/);
   });
 });
+
+describe("fitCarryOffsets: how far the readings check the fit", () => {
+  it("says a fit of as many offsets as readings cannot be checked: no degrees of freedom, no residual spread", () => {
+    // One reading, one instrument: any reading is matched exactly.
+    const fit = fitCarryOffsets({ readings: [reading({ trumpets: "f" }, withCarry({ trumpet: 4 }))] });
+    expect(fit.degreesOfFreedom).toBe(0);
+    expect(fit.residualStdDb).toBeNull();
+  });
+
+  it("takes the residual spread from the degrees of freedom (hand calculation: readings 1, 2, 3 dB above one prediction)", () => {
+    // Three readings of the same set read 1, 2 and 3 dB above the catalog's prediction. One offset δ
+    // is fitted: with Tikhonov λ = 0.01, δ = Σ(m − p)/(3 + λ) = 6/3.01 = 1.993355 dB; residuals
+    // δ − 1, δ − 2, δ − 3; spread √(Σ res² / (3 − 1)) = √(2.000132/2) = 1.000033 dB.
+    const base = reading({ trumpets: "f" }, DEFAULT_INSTRUMENTS);
+    const at = (d: number) => ({ ...base, measuredDbA: base.measuredDbA! + d });
+    const fit = fitCarryOffsets({ readings: [at(1), at(2), at(3)] });
+    expect(fit.degreesOfFreedom).toBe(2);
+    expect(fit.offsetsDb.trumpet).toBeCloseTo(6 / 3.01, 6);
+    expect(fit.residualStdDb).toBeCloseTo(1.000033, 5);
+  });
+});

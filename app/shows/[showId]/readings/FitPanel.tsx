@@ -66,12 +66,19 @@ export function FitPanel({ showId, programId, readings, fit, canAdopt, onChanged
     return <p className="text-ink-soft">No readings yet. Record one below, or upload a CSV from the evening at the stadium.</p>;
   }
   const f = fit.data;
+  // "Pinned" needs readings left over after the fit; with none, the ± rests on the meter alone.
+  const checkable = f?.degreesOfFreedom == null || f.degreesOfFreedom > 0;
   return (
     <div className="space-y-5">
       <p className="text-ink-soft">
         Predictions are estimates, not measurements. <strong className="text-ink">Now</strong> uses the catalog in force
         {f ? ` (version ${f.baseVersion})` : ""}; <strong className="text-ink">after fit</strong> uses the carry changes below.
         {f?.rmsBeforeDb != null ? ` Typical gap: ${db1(f.rmsBeforeDb)} dB now, ${db1(f.rmsAfterDb!)} dB after the fit.` : ""}
+        {f?.degreesOfFreedom != null && f.degreesOfFreedom <= 0
+          ? " Not enough readings to check the fit: with no more readings than carry changes, the fit can match any readings."
+          : f?.residualStdDb != null
+            ? ` Readings scatter ±${db1(f.residualStdDb)} dB about the fit (${f.degreesOfFreedom} degree${f.degreesOfFreedom === 1 ? "" : "s"} of freedom).`
+            : ""}
       </p>
       <div className="overflow-x-auto rounded-lg border border-ink/10">
         <table className="w-full min-w-[52rem] border-collapse text-left">
@@ -137,7 +144,8 @@ export function FitPanel({ showId, programId, readings, fit, canAdopt, onChanged
               <li key={i.key} className="rounded-lg border border-ink/10 bg-paper px-3 py-2">
                 <span className="font-semibold">{i.name}</span>: {signedDb(i.offsetDb)}{" "}
                 <span className="text-ink-soft">
-                  (carry {signedDb(i.carryDb)} → {signedDb(i.carryDb + i.offsetDb)}; ±{db1(i.stdErrorDb)} dB from {i.readings} reading{i.readings === 1 ? "" : "s"}, pinned {pinned(i)})
+                  (carry {signedDb(i.carryDb)} → {signedDb(i.carryDb + i.offsetDb)}; ±{db1(i.stdErrorDb)} dB from {i.readings} reading{i.readings === 1 ? "" : "s"}
+                  {checkable ? `, pinned ${pinned(i)}` : ", not checked"})
                 </span>
                 {Math.abs(i.offsetDb) > LARGE_CHANGE_DB ? (
                   <span className="block text-sm text-signal-warn">A change this large often means a mistyped reading, the wrong weighting, or a section playing louder than written: check before adopting.</span>

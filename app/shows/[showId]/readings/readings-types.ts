@@ -34,6 +34,9 @@ export type FitResponse = {
   indistinguishable: [string, string][];
   rmsBeforeDb: number | null;
   rmsAfterDb: number | null;
+  /** Readings minus fitted offsets; 0 or fewer: the fit matches any readings and checks nothing. */
+  degreesOfFreedom?: number | null;
+  residualStdDb?: number | null;
 };
 
 export type CatalogVersion = { version: number; note: string; createdBy: string | null; createdAt: string; carryDb: Record<string, number> };
