@@ -1,0 +1,22 @@
+// Mutation testing of the pure engine (npm run mutation; not part of npm test: it is slow).
+// Stryker changes one operator or constant at a time in lib/acoustics and lib/music and runs the
+// unit tests that cover it; a mutant that no test notices "survives". Scope a run while working:
+// npm run mutation -- --mutate lib/acoustics/ground.ts
+/** @type {import('@stryker-mutator/api/core').PartialStrykerOptions} */
+const config = {
+  testRunner: "vitest",
+  vitest: { configFile: "vitest.mutation.config.ts" },
+  plugins: ["@stryker-mutator/vitest-runner"],
+  mutate: ["lib/acoustics/**/*.ts", "lib/music/**/*.ts"],
+  coverageAnalysis: "perTest",
+  // The machine is shared: two test processes at most.
+  concurrency: 2,
+  reporters: ["clear-text", "progress", "json"],
+  jsonReporter: { fileName: ".tmp/mutation/report.json" },
+  tempDirName: ".tmp/stryker",
+  cleanTempDir: "always",
+  incremental: false,
+  timeoutMS: 20000,
+};
+
+export default config;
