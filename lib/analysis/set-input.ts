@@ -1,28 +1,14 @@
 // The engine input of a stored set, as the server and the editor's live preview both use it.
 import "server-only";
 import { loadSetContext } from "@/db/queries/set-context";
-import type { Conditions, InstrumentCatalog } from "@/lib/acoustics/types";
+import type { InstrumentCatalog } from "@/lib/acoustics/types";
 import { buildAnalysisInput } from "@/lib/music/analysis-input";
+import { showConditions, type ShowConditionsRow } from "./show-conditions";
 
-type ShowRow = {
-  id: string;
-  programId: string;
-  temperatureC: number;
-  relativeHumidityPct: number;
-  pressureKPa: number;
-  groundFactor: number | null;
-  betweenGroundFactor: number | null;
-};
+type ShowRow = ShowConditionsRow & { id: string; programId: string };
 
-export function showConditions(show: ShowRow): Conditions {
-  return {
-    temperatureC: show.temperatureC,
-    relativeHumidityPct: show.relativeHumidityPct,
-    pressureKPa: show.pressureKPa,
-    groundFactor: show.groundFactor,
-    betweenGroundFactor: show.betweenGroundFactor,
-  };
-}
+/** Re-exported for the callers that read it from here. */
+export { showConditions };
 
 export async function setAnalysisInput(show: ShowRow, set: { id: string; order: number }) {
   const ctx = await loadSetContext(show, set);

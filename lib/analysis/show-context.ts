@@ -8,6 +8,7 @@ import { listListeningPoints, listPerformers, listSets } from "@/db/queries/show
 import type { Show } from "@/db/schema";
 import type { InstrumentCatalog } from "@/lib/acoustics/types";
 import type { BalanceContext } from "./balance-inputs";
+import { showConditions } from "./show-conditions";
 import { showTargets } from "./show-targets";
 
 export type ShowSet = Awaited<ReturnType<typeof listSets>>[number] & { positions: { performerId: string; x: number; y: number; facingDeg: number }[] };
@@ -31,14 +32,7 @@ export async function loadShowBalance(show: Show) {
     roster,
     music,
     listeningPoints,
-    // The same fields as set-input.ts's showConditions, which is marked server-only.
-    conditions: {
-      temperatureC: show.temperatureC,
-      relativeHumidityPct: show.relativeHumidityPct,
-      pressureKPa: show.pressureKPa,
-      groundFactor: show.groundFactor,
-      betweenGroundFactor: show.betweenGroundFactor,
-    },
+    conditions: showConditions(show),
     instruments: (catalog?.instruments as InstrumentCatalog | undefined) ?? undefined,
   };
   const sets: ShowSet[] = setRows.map((s) => ({ ...s, positions: bySet.get(s.id) ?? [] }));

@@ -1,6 +1,7 @@
 import { NextResponse } from "next/server";
 import { listListeningPoints, listPerformers, listSets } from "@/db/queries/shows";
 import { requireShow } from "@/lib/auth/access";
+import { showConditions } from "@/lib/analysis/show-conditions";
 import { route } from "@/lib/http/handler";
 
 export const GET = route<{ showId: string }>(async (_req, { showId }) => {
@@ -12,13 +13,7 @@ export const GET = route<{ showId: string }>(async (_req, { showId }) => {
       programId: show.programId,
       name: show.name,
       fieldRules: show.fieldRules,
-      conditions: {
-        temperatureC: show.temperatureC,
-        relativeHumidityPct: show.relativeHumidityPct,
-        pressureKPa: show.pressureKPa,
-        groundFactor: show.groundFactor,
-        betweenGroundFactor: show.betweenGroundFactor,
-      },
+      conditions: showConditions(show),
     },
     role,
     listeningPoints,
