@@ -1,15 +1,15 @@
 // The hearing map of a stored set, as the hearing route and page show it.
 import "server-only";
-import { hearingMap } from "@/lib/acoustics/hearing";
 import { setAnalysisInput } from "@/lib/analysis/set-input";
 import { listPerformers } from "@/db/queries/shows";
+import { runHeavy } from "@/lib/heavy/pool";
 
 const round1 = (x: number) => Math.round(x * 10) / 10;
 const finiteOrNull = (x: number) => (Number.isFinite(x) ? x : null);
 
 export async function setHearing(show: Parameters<typeof setAnalysisInput>[0], set: { id: string; number: string; order: number }, rehearsalMinutes: number) {
   const [{ input, catalogVersion }, roster] = await Promise.all([setAnalysisInput(show, set), listPerformers(show.id)]);
-  const map = hearingMap(input, { rehearsalMinutes });
+  const map = await runHeavy("hearingMap", input, { rehearsalMinutes });
   const byId = new Map(roster.map((p) => [p.id, p]));
   return {
     set: { id: set.id, number: set.number },

@@ -1,8 +1,39 @@
 // Reading and validating request input: size limit first, then JSON, then zod.
 import type { z } from "zod";
+import { MAX_JSON_DEPTH } from "@/lib/limits";
 import { badRequest, tooLarge } from "./errors";
 
 export const MAX_JSON_BYTES = 1_000_000;
+
+/**
+ * True when arrays and objects in the JSON text nest deeper than `max`. Checked before parsing: a
+ * deeply nested value passes JSON.parse but overflows the stack of whatever walks it later.
+ */
+export function nestsDeeper(text: string, max = MAX_JSON_DEPTH): boolean {
+  let depth = 0;
+  let inString = false;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (inString) {
+      if (c === 92) i++; // backslash: skip the escaped character
+      else if (c === 34) inString = false;
+    } else if (c === 34) inString = true;
+    else if (c === 91 || c === 123) {
+      if (++depth > max) return true;
+    } else if (c === 93 || c === 125) depth--;
+  }
+  return false;
+}
+
+/** JSON text as a value, or null when it is not JSON; refuses (400) nesting past MAX_JSON_DEPTH. */
+export function parseJsonText(text: string, what = "The request body"): { value: unknown } | null {
+  if (nestsDeeper(text)) throw badRequest(`${what} nests arrays or objects more than ${MAX_JSON_DEPTH} levels deep.`);
+  try {
+    return { value: JSON.parse(text) };
+  } catch {
+    return null;
+  }
+}
 
 /** Field errors keyed by dotted path, as shared/API.md's `issues`. */
 export function fieldIssues(error: z.ZodError): Record<string, string[]> {
@@ -21,14 +52,9 @@ export function parseWith<T extends z.ZodType>(schema: T, value: unknown, what =
 }
 
 export async function readJson<T extends z.ZodType>(req: Request, schema: T, maxBytes = MAX_JSON_BYTES): Promise<z.infer<T>> {
-  const text = await readTextLimited(req, maxBytes);
-  let value: unknown;
-  try {
-    value = JSON.parse(text);
-  } catch {
-    throw badRequest("The request body is not valid JSON.");
-  }
-  return parseWith(schema, value, "The request body");
+  const parsed = parseJsonText(await readTextLimited(req, maxBytes));
+  if (!parsed) throw badRequest("The request body is not valid JSON.");
+  return parseWith(schema, parsed.value, "The request body");
 }
 
 /** The raw body, refused with 413 (and `message`) once it passes `maxBytes`, whatever Content-Length claims. */

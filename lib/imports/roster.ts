@@ -41,14 +41,15 @@ export interface RosterPlan {
   errors: LineError[];
 }
 
-const LABEL = /^[A-Za-z0-9][A-Za-z0-9 ._\-]{0,15}$/;
+/** A performer's label as the roster accepts it (also the show file's). */
+export const LABEL_PATTERN = /^[A-Za-z0-9][A-Za-z0-9 ._\-]{0,15}$/;
 const FIELDS: Field[] = ["instrument", "section", "part", "strengthDb", "name"];
 
 function readEntry(line: number, c: Record<string, string>, instruments: Map<string, string>): RosterEntry | string[] {
   const reasons: string[] = [];
   const label = c.label ?? "";
   if (!label) reasons.push("label is empty");
-  else if (!LABEL.test(label)) reasons.push(`label "${label}" must be 1–16 letters or digits (e.g. T4)`);
+  else if (!LABEL_PATTERN.test(label)) reasons.push(`label "${label}" must be 1–16 letters or digits (e.g. T4)`);
   const instrument = instruments.get((c.instrument ?? "").toLowerCase());
   if (!c.instrument) reasons.push("instrument is empty");
   else if (!instrument) reasons.push(`instrument "${c.instrument}" is not in the program's catalog`);

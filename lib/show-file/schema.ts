@@ -1,68 +1,74 @@
 // The show file: one versioned JSON document holding a whole show without any database ids, so a
-// show exported, imported and exported again gives the same document. Pure (zod).
-import { z } from "zod";
-import { DYNAMICS, VOICES } from "@/lib/acoustics/types";
+// show exported, imported and exported again gives the same document. Each part is checked with the
+// schema of the route that writes the same thing, and unknown keys are refused. Pure (zod).
+import { LABEL_PATTERN } from "@/lib/imports/roster";
+import { listeningPointSchema } from "@/lib/validation/listening-points";
+import { dynamicSchema, overrideSchema, phraseSchema, voiceSchema } from "@/lib/validation/music";
+import { addPerformersSchema } from "@/lib/validation/performers";
 import { planLimitsSchema } from "@/lib/validation/plan-limits";
+import { positionSchema } from "@/lib/validation/positions";
+import { countsSchema, setNumberSchema } from "@/lib/validation/sets";
+import { conditionsSchema, createShowSchema } from "@/lib/validation/shows";
+import { targetsSchema } from "@/lib/validation/targets";
+import { z } from "@/lib/validation/zod";
 
 export const SHOW_FILE_FORMAT = "farfield-show";
 export const SHOW_FILE_VERSION = 1;
 
-const finite = z.number().refine(Number.isFinite, "must be a finite number");
-const dynamic = z.enum(DYNAMICS);
-const voice = z.enum([...VOICES, "tacet"]);
-const label = z.string().min(1).max(16);
-const setNumber = z.string().regex(/^\d{1,3}[A-Za-z]?$/, "must be a set number such as 12 or 12A");
+const label = z.string().regex(LABEL_PATTERN, "A label is 1–16 letters or digits, e.g. T4.");
+const section = addPerformersSchema.shape.section.unwrap();
 
 export const showFileSchema = z
   .object({
     format: z.literal(SHOW_FILE_FORMAT),
     version: z.literal(SHOW_FILE_VERSION),
-    show: z.object({
-      name: z.string().min(1).max(160),
-      fieldRules: z.enum(["high-school", "college"]),
-      conditions: z.object({
-        temperatureC: finite,
-        relativeHumidityPct: finite.refine((v) => v >= 0 && v <= 100, "must be 0 to 100"),
-        pressureKPa: finite.refine((v) => v > 0, "must be above 0"),
-        groundFactor: finite.refine((v) => v >= 0 && v <= 1, "must be 0 to 1").nullable(),
-      }),
-      checkTargets: z.unknown().nullable(),
-      planLimits: planLimitsSchema.nullable().optional(),
-    }),
-    listeningPoints: z.array(z.object({ name: z.string().min(1).max(120), x: finite, y: finite, z: finite, order: z.number().int() })).max(50),
-    performers: z
-      .array(
-        z.object({
+    show: z
+      .object({
+        name: createShowSchema.shape.name,
+        fieldRules: createShowSchema.shape.fieldRules,
+        conditions: conditionsSchema,
+        checkTargets: targetsSchema.nullable(),
+        planLimits: planLimitsSchema.nullable().optional(),
+      })
+      .strict(),
+    listeningPoints: z.array(listeningPointSchema.extend({ order: z.number().int().min(0).max(10_000) }).strict()),
+    performers: z.array(
+      z
+        .object({
           label,
-          instrument: z.string().min(1).max(60),
-          section: z.string().min(1).max(60),
-          part: z.string().max(40),
-          strengthDb: finite.refine((v) => v >= -6 && v <= 6, "must be -6 to 6 dB"),
-          name: z.string().max(120).nullable(),
-        }),
-      )
-      .max(1000),
-    movements: z.array(z.object({ number: z.number().int().min(1), name: z.string().max(160) })).max(50),
-    sets: z
-      .array(
-        z.object({
-          number: setNumber,
-          counts: z.number().int().min(0).max(999),
+          instrument: addPerformersSchema.shape.instrument,
+          section,
+          part: addPerformersSchema.shape.part,
+          strengthDb: addPerformersSchema.shape.strengthDb,
+          name: z.string().max(120, "That name is too long.").nullable(),
+        })
+        .strict(),
+    ),
+    movements: z.array(z.object({ number: z.number().int().min(1).max(99), name: z.string().max(160) }).strict()).max(50),
+    sets: z.array(
+      z
+        .object({
+          number: setNumberSchema,
+          counts: countsSchema,
           movement: z.number().int().nullable(),
-          positions: z.array(z.object({ label, x: finite, y: finite, facingDeg: finite })).max(1000),
-        }),
-      )
-      .max(500),
+          positions: z.array(positionSchema.omit({ performerId: true }).extend({ label }).strict()),
+        })
+        .strict(),
+    ),
     phrases: z
       .array(
-        z.object({
-          name: z.string().min(1).max(160),
-          firstSet: setNumber,
-          lastSet: setNumber,
-          voices: z.array(z.object({ section: z.string().min(1).max(60), voice, writtenDynamic: dynamic, playedDynamic: dynamic.nullable() })),
-          overrides: z.array(z.object({ label, voice, writtenDynamic: dynamic, playedDynamic: dynamic.nullable(), note: z.string().max(500) })),
-          planLimits: planLimitsSchema.nullable().optional(),
-        }),
+        z
+          .object({
+            name: phraseSchema.shape.name,
+            firstSet: setNumberSchema,
+            lastSet: setNumberSchema,
+            voices: z.array(z.object({ section, voice: voiceSchema, writtenDynamic: dynamicSchema, playedDynamic: dynamicSchema.nullable() }).strict()).max(200),
+            overrides: z
+              .array(overrideSchema.omit({ phraseId: true, performerId: true }).extend({ label, playedDynamic: dynamicSchema.nullable() }).strict())
+              .max(500),
+            planLimits: planLimitsSchema.nullable().optional(),
+          })
+          .strict(),
       )
       .max(500),
   })

@@ -51,3 +51,6 @@ export const adoptPlanSchema = z.object({
   listeningPointId: id("listeningPointId"),
   entries: z.array(z.object({ section: z.string().min(1).max(120), playedDynamic: dynamic })).min(1).max(200),
 });
+
+/** A voice (or tacet) and a dynamic, as every music route takes them (the show file too). */
+export { voice as voiceSchema, dynamic as dynamicSchema };

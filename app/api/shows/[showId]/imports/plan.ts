@@ -5,9 +5,9 @@ import { loadImportContext } from "@/db/queries/uploads";
 import type { Show } from "@/db/schema";
 import { describePosition } from "@/lib/field/words";
 import { planDrill, type DrillPlan } from "@/lib/imports/drill";
-import { MAX_DRILL_ROWS, MAX_ROSTER_ROWS } from "@/lib/imports/limits";
+import { MAX_DRILL_ROWS, MAX_ROSTER_ROWS, showLimitProblem } from "@/lib/limits";
 import { planRoster, type RosterPlan } from "@/lib/imports/roster";
-import { tooLarge } from "@/lib/http/errors";
+import { tooLarge, unprocessable } from "@/lib/http/errors";
 import { uploadText } from "@/lib/http/upload";
 
 export type ImportKind = "roster-csv" | "drill-csv";
@@ -23,10 +23,15 @@ export async function planUpload(show: Show, kind: ImportKind, content: Buffer):
     const instruments = Object.entries((catalog?.instruments ?? {}) as Record<string, { name?: string }>).map(([key, spec]) => ({ key, name: spec.name ?? key }));
     const plan = planRoster(text, { existing: context.roster, instruments });
     if (plan.rows > MAX_ROSTER_ROWS) throw tooLarge(`A roster file may hold at most ${MAX_ROSTER_ROWS} rows; this one has ${plan.rows}.`);
+    const full = showLimitProblem("performers", context.roster.length + plan.creates.length);
+    if (full) throw unprocessable(`${full} The file adds ${plan.creates.length} to the ${context.roster.length} on the roster.`);
     return { kind, plan };
   }
   const plan = planDrill(text, { rules: show.fieldRules, performers: context.roster, sets: context.sets });
   if (plan.rows > MAX_DRILL_ROWS) throw tooLarge(`A drill file may hold at most ${MAX_DRILL_ROWS} rows; this one has ${plan.rows}.`);
+  const added = plan.sets.filter((s) => s.setId === null).length;
+  const full = showLimitProblem("sets", context.sets.length + added);
+  if (full) throw unprocessable(`${full} The file adds ${added} sets to the ${context.sets.length} of the show.`);
   return { kind, plan };
 }
 

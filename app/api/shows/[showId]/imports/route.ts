@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
 import { listUploads, storeUpload } from "@/db/queries/uploads";
 import { requireShow } from "@/lib/auth/access";
-import { MAX_UPLOAD_BYTES } from "@/lib/imports/limits";
+import { MAX_UPLOAD_BYTES } from "@/lib/limits";
 import { badRequest } from "@/lib/http/errors";
 import { route } from "@/lib/http/handler";
 import { readUpload } from "@/lib/http/upload";

@@ -5,9 +5,10 @@ import { DEFAULT_INSTRUMENTS } from "@/lib/acoustics/catalog";
 import type { InstrumentCatalog } from "@/lib/acoustics/types";
 import { requireShow } from "@/lib/auth/access";
 import { labelPrefix, nextLabels } from "@/lib/editor/naming";
-import { badRequest, conflict } from "@/lib/http/errors";
+import { badRequest, conflict, unprocessable } from "@/lib/http/errors";
 import { readJson } from "@/lib/http/body";
 import { route } from "@/lib/http/handler";
+import { showLimitProblem } from "@/lib/limits";
 import { addPerformersSchema } from "@/lib/validation/performers";
 
 /** Adds performers to the roster by instrument; labels and section follow the roster's own when not given. */
@@ -18,6 +19,8 @@ export const POST = route<{ showId: string }>(async (req, { showId }) => {
   const spec = catalog[body.instrument];
   if (!spec) throw badRequest(`"${body.instrument}" is not an instrument of this program's catalog.`, { instrument: ["unknown instrument"] });
   const roster = await rosterLabels(showId);
+  const full = showLimitProblem("performers", roster.length + body.count);
+  if (full) throw unprocessable(full);
   const labels = body.label ? [body.label.toUpperCase()] : nextLabels(labelPrefix(body.instrument, roster), roster.map((r) => r.label), body.count);
   const section = body.section ?? roster.find((r) => r.instrument === body.instrument)?.section ?? spec.name;
   const result = await addPerformers(

@@ -3,9 +3,10 @@ import { createSet, findSetInShow } from "@/db/queries/sets";
 import { listSets } from "@/db/queries/shows";
 import { requireShow } from "@/lib/auth/access";
 import { insertedSetNumber, nextSetNumber } from "@/lib/editor/naming";
-import { badRequest, conflict } from "@/lib/http/errors";
+import { badRequest, conflict, unprocessable } from "@/lib/http/errors";
 import { readJson } from "@/lib/http/body";
 import { route } from "@/lib/http/handler";
+import { showLimitProblem } from "@/lib/limits";
 import { createSetSchema } from "@/lib/validation/sets";
 
 /** Counts of a new set when none are given: two bars of 4/4 (common practice, no source). */
@@ -24,6 +25,8 @@ export const POST = route<{ showId: string }>(async (req, { showId }) => {
   const source = await known(body.duplicateOf, "duplicateOf");
   const after = (await known(body.after, "after")) ?? source;
   const all = await listSets(showId);
+  const full = showLimitProblem("sets", all.length + 1);
+  if (full) throw unprocessable(full);
   const numbers = all.map((s) => s.number);
   // A set inserted between two is numbered after the one before it (12A); one added at the end gets the next number.
   const inserted = after !== null && all.some((s) => s.order > after.order);

@@ -1,8 +1,7 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { loadShowBalance } from "@/lib/analysis/show-context";
-import { showSweeps } from "@/lib/analysis/show-sweeps";
-import { sweepStore } from "@/lib/analysis/sweep-store";
+import { storedShowSweeps } from "@/lib/analysis/sweep-store";
 import { transitionOf } from "@/lib/analysis/timeline";
 import { requireShow } from "@/lib/auth/access";
 import { parseWith } from "@/lib/http/body";
@@ -20,7 +19,7 @@ export const GET = route<{ showId: string }>(async (req, { showId }) => {
   const { setId, listeningPointId } = parseWith(query, Object.fromEntries(new URL(req.url).searchParams), "The query");
   const sb = await loadShowBalance(show);
   if (!sb.listeningPoints.some((l) => l.id === listeningPointId)) throw notFound("No such listening point in this show.");
-  const { sweeps } = await showSweeps(sb, sweepStore);
+  const { sweeps } = await storedShowSweeps(sb);
   const t = transitionOf(sweeps, setId, listeningPointId);
   if (!t) throw notFound("No such set.");
   return NextResponse.json(t);

@@ -1,8 +1,7 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { loadShowBalance } from "@/lib/analysis/show-context";
-import { showSweeps } from "@/lib/analysis/show-sweeps";
-import { sweepStore } from "@/lib/analysis/sweep-store";
+import { storedShowSweeps } from "@/lib/analysis/sweep-store";
 import { showTimeline } from "@/lib/analysis/timeline";
 import { requireShow } from "@/lib/auth/access";
 import { parseWith } from "@/lib/http/body";
@@ -17,6 +16,6 @@ export const GET = route<{ showId: string }>(async (req, { showId }) => {
   const { listeningPointId } = parseWith(query, Object.fromEntries(new URL(req.url).searchParams), "The query");
   const sb = await loadShowBalance(show);
   if (!sb.listeningPoints.some((l) => l.id === listeningPointId)) throw notFound("No such listening point in this show.");
-  const { sweeps, recomputed, reused } = await showSweeps(sb, sweepStore);
+  const { sweeps, recomputed, reused } = await storedShowSweeps(sb);
   return NextResponse.json({ ...showTimeline(sweeps, listeningPointId), recomputed, reused });
 });
