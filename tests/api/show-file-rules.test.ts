@@ -85,8 +85,9 @@ describe("the show file keeps the rules of the routes", () => {
       changed((d) => {
         const model = d.performers[0];
         d.performers = Array.from({ length: 501 }, (_, i) => ({ ...model, label: `Q${i}` }));
+        // Otherwise valid: no positions or music that would name the performers replaced.
         for (const s of d.sets) s.positions = [];
-        for (const p of d.phrases) p.overrides = [];
+        d.phrases = [];
       }),
       413,
     );
