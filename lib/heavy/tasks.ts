@@ -4,6 +4,7 @@ import { hearingMap } from "@/lib/acoustics/hearing";
 import { staleSweeps } from "@/lib/analysis/show-sweeps";
 import { readShowFile } from "@/lib/show-file/read";
 
+export const HEAVY_TASKS = { staleSweeps, hearingMap, readShowFile };
 
 export type HeavyTask = keyof typeof HEAVY_TASKS;
 export type HeavyArgs<K extends HeavyTask> = Parameters<(typeof HEAVY_TASKS)[K]>;
