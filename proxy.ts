@@ -3,6 +3,7 @@
 // from lib/http/handler.ts; skipping the proxy on API requests without an Origin (scripts, same-origin
 // reads) roughly halves their cost.
 import { NextResponse, type NextRequest } from "next/server";
+import { requestHost } from "@/lib/http/client-address";
 import { API_CSP, setSecurityHeaders } from "@/lib/http/security-headers";
 
 const WRITE_METHODS = new Set(["POST", "PUT", "PATCH", "DELETE"]);
@@ -10,7 +11,7 @@ const WRITE_METHODS = new Set(["POST", "PUT", "PATCH", "DELETE"]);
 function sameOrigin(req: NextRequest): boolean {
   const origin = req.headers.get("origin");
   if (!origin) return true; // scripts and same-origin navigations without Origin; browsers send it on cross-site writes
-  const host = req.headers.get("x-forwarded-host") ?? req.headers.get("host");
+  const host = requestHost(req); // X-Forwarded-Host only from the proxies TRUSTED_PROXY_HOPS names
   try {
     return new URL(origin).host === host;
   } catch {

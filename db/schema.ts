@@ -54,15 +54,26 @@ export const sessions = pgTable(
   (t) => [index("sessions_user_idx").on(t.userId)],
 );
 
-// One row per sign-in attempt, keyed by account and by address, so every app process counts the same.
-export const signInAttempts = pgTable(
-  "sign_in_attempts",
+// Sign-in limits: one counter row per key ("account:…", "address:…", "device:…"), reserved in one
+// atomic upsert before a password is checked, so parallel attempts cannot all be tried.
+export const signInLimits = pgTable("sign_in_limits", {
+  key: text("key").primaryKey(),
+  failures: integer("failures").notNull(),
+  windowStartedAt: timestamp("window_started_at", { withTimezone: true, mode: "date" }).notNull(),
+  // The next attempt is refused before this time (accounts slow down instead of locking).
+  nextAllowedAt: timestamp("next_allowed_at", { withTimezone: true, mode: "date" }).notNull(),
+});
+
+// Browsers that signed in to an account before (the device cookie's token, hashed): the owner keeps
+// signing in from them while an attacker slows the account down.
+export const knownDevices = pgTable(
+  "known_devices",
   {
-    id: uuid("id").primaryKey().defaultRandom(),
-    key: text("key").notNull(),
-    attemptedAt: timestamp("attempted_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    tokenHash: text("token_hash").primaryKey(),
+    email: text("email").notNull(),
+    createdAt: createdAt(),
   },
-  (t) => [index("sign_in_attempts_key_time_idx").on(t.key, t.attemptedAt)],
+  (t) => [index("known_devices_created_idx").on(t.createdAt)],
 );
 
 export const programs = pgTable("programs", {

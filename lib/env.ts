@@ -15,6 +15,13 @@ const schema = z.object({
   MAIL_DIR: z.string().default(".data/mail"),
   /** "true" when npm start or npm test run the fake SMTP server: the demo's directors may read its messages. */
   DEV_MAILBOX: z.enum(["true", "false"]).optional(),
+  /**
+   * How many proxies (load balancers) stand in front of the app and append to X-Forwarded-For and
+   * X-Forwarded-Host. 0 (the default): those headers are the client's own words and are ignored.
+   */
+  TRUSTED_PROXY_HOPS: z.coerce.number().int().min(0).max(10).default(0),
+  /** Set by server.ts, which writes each connection's address into a header of its own. */
+  FARFIELD_PEER_HEADER: z.enum(["true"]).optional(),
   /** Cookies are Secure unless the app is served on plain http (local use). */
   COOKIE_SECURE: z.enum(["true", "false"]).optional(),
 });

@@ -34,4 +34,4 @@ cat <<MSG
   $mail_words
 
 MSG
-exec npx next start -H 127.0.0.1 -p "$PORT"
+exec npx tsx server.ts -H 127.0.0.1 -p "$PORT"

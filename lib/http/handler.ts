@@ -9,7 +9,7 @@ type Ctx<P> = { params: Promise<P> };
 
 export function errorResponse(err: unknown): NextResponse {
   if (err instanceof HttpError) {
-    return NextResponse.json({ error: err.message, ...err.extra }, { status: err.status });
+    return NextResponse.json({ error: err.message, ...err.extra }, { status: err.status, headers: err.headers });
   }
   if (err instanceof z.ZodError) {
     return NextResponse.json({ error: "The request is not valid.", issues: fieldIssues(err) }, { status: 400 });
@@ -32,6 +32,8 @@ export function route<P = Record<string, string>>(handler: (req: Request, params
     }
     // Here rather than in next.config.ts headers(), whose rules are matched against every request's path.
     setSecurityHeaders(res.headers, API_CSP);
+    // Answers carry program data for one signed-in person: no browser or shared cache may keep them.
+    if (!res.headers.has("cache-control")) res.headers.set("Cache-Control", "no-store");
     return res;
   };
 }

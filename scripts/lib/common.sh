@@ -63,7 +63,7 @@ ensure_node_modules() {
 # Build when no build exists or any source is newer than it.
 ensure_build() {
   local id="$ROOT/.next/BUILD_ID"
-  if [ -f "$id" ] && [ -z "$(cd "$ROOT" && find app components lib db public next.config.ts instrumentation.ts tailwind.config.ts package-lock.json -newer "$id" -print -quit 2>/dev/null)" ]; then
+  if [ -f "$id" ] && [ -z "$(cd "$ROOT" && find app components lib db public next.config.ts instrumentation.ts proxy.ts tailwind.config.ts package-lock.json -newer "$id" -print -quit 2>/dev/null)" ]; then
     return
   fi
   log "building the app (next build)"

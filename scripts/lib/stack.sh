@@ -22,8 +22,8 @@ stack_up() {
   export APP_PORT="$(free_port)"
   export APP_URL="http://127.0.0.1:$APP_PORT"
   export APP_BASE_URL="$APP_URL"
-  # A process group of its own, so stopping it also stops the server process next start spawns.
-  setsid npx next start -H 127.0.0.1 -p "$APP_PORT" >"$APP_LOG" 2>&1 &
+  # A process group of its own, so stopping it also stops the server process npx spawns.
+  setsid npx tsx server.ts -H 127.0.0.1 -p "$APP_PORT" >"$APP_LOG" 2>&1 &
   STACK_APP_PID=$!
   node scripts/lib/wait-http.mjs "$APP_URL/api/health" 60 || { tail -n 40 "$APP_LOG" >&2; exit 1; }
 }

@@ -19,7 +19,7 @@ describe("migrations", () => {
     const tables = await sql<{ table_name: string }[]>`
       select table_name from information_schema.tables where table_schema = 'public' order by table_name`;
     const names = tables.map((t) => t.table_name);
-    for (const t of ["users", "sessions", "programs", "memberships", "shows", "listening_points", "instrument_catalogs", "performers", "movements", "sets", "positions", "phrases", "voice_assignments", "performer_overrides", "analyses", "sign_in_attempts"]) {
+    for (const t of ["users", "sessions", "programs", "memberships", "shows", "listening_points", "instrument_catalogs", "performers", "movements", "sets", "positions", "phrases", "voice_assignments", "performer_overrides", "analyses", "sign_in_limits", "known_devices"]) {
       expect(names).toContain(t);
     }
     const roles = await sql<{ enumlabel: string }[]>`

@@ -16,23 +16,28 @@ export interface ApiAnswer<T = any> {
 }
 
 export class Client {
+  /** The session cookie (name=value). */
   cookie: string | null = null;
+  /** The device cookie a sign-in sets (lib/auth/known-device.ts), sent back like a browser would. */
+  device: string | null = null;
 
   constructor(readonly base: string = APP_URL) {}
 
   async call<T = any>(method: string, path: string, body?: unknown, init: { headers?: Record<string, string>; raw?: string } = {}): Promise<ApiAnswer<T>> {
     const headers: Record<string, string> = { ...(init.headers ?? {}) };
-    if (this.cookie) headers.cookie = this.cookie;
+    const cookies = [this.cookie, this.device].filter(Boolean);
+    if (cookies.length) headers.cookie = cookies.join("; ");
     let payload: string | undefined = init.raw;
     if (body !== undefined) {
       payload = JSON.stringify(body);
       headers["content-type"] = "application/json";
     }
     const res = await fetch(this.base + path, { method, headers, body: payload, redirect: "manual" });
-    const setCookie = res.headers.get("set-cookie");
-    if (setCookie) {
+    for (const setCookie of res.headers.getSetCookie()) {
       const pair = setCookie.split(";")[0]!;
-      this.cookie = pair.endsWith("=") ? null : pair;
+      const value = pair.endsWith("=") ? null : pair;
+      if (pair.startsWith("farfield_device=")) this.device = value;
+      else this.cookie = value;
     }
     const text = await res.text();
     let parsed: any = text;

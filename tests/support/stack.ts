@@ -65,11 +65,11 @@ export interface App {
   stop(): Promise<void>;
 }
 
-/** The production build served against `databaseUrl` on a free port; `env` adds or overrides variables. */
+/** The production build served (by server.ts, as npm start does) against `databaseUrl` on a free port; `env` adds or overrides variables. */
 export async function startApp(databaseUrl: string, env: Record<string, string> = {}): Promise<App> {
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
-  const proc = spawn(path.join(ROOT, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
+  const proc = spawn(path.join(ROOT, "node_modules/.bin/tsx"), ["server.ts", "-H", "127.0.0.1", "-p", String(port)], {
     cwd: ROOT,
     env: { ...process.env, DATABASE_URL: databaseUrl, APP_BASE_URL: url, PORT: String(port), ...env },
     stdio: "ignore",

@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
 import { findUserByEmail } from "@/db/queries/users";
 import { verifyPassword } from "@/lib/auth/password";
-import { assertSignInAllowed, clientAddress, recordFailedSignIn, recordSuccessfulSignIn } from "@/lib/auth/rate-limit";
+import { beginSignIn } from "@/lib/auth/rate-limit";
 import { startSession } from "@/lib/auth/session";
 import { HttpError } from "@/lib/http/errors";
 import { readJson } from "@/lib/http/body";
@@ -13,15 +13,11 @@ const DUMMY_HASH = "$argon2id$v=19$m=19456,t=2,p=1$4HPm1ZcfFF0/qUhktyQaZA$Hj1R9Z
 
 export const POST = route(async (req) => {
   const { email, password } = await readJson(req, signInSchema, 10_000);
-  const address = clientAddress(req);
-  await assertSignInAllowed(email, address);
+  const attempt = await beginSignIn(email, req); // counted as a failure before the password is checked
   const user = await findUserByEmail(email);
   const ok = await verifyPassword(user?.passwordHash ?? DUMMY_HASH, password);
-  if (!user || !ok) {
-    await recordFailedSignIn(email, address);
-    throw new HttpError(401, "Wrong e-mail or password.");
-  }
-  await recordSuccessfulSignIn(email);
+  if (!user || !ok) throw new HttpError(401, "Wrong e-mail or password.");
   await startSession(user.id);
+  await attempt.succeeded();
   return NextResponse.json({ user: { id: user.id, email: user.email, name: user.name } });
 });

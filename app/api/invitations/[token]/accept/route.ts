@@ -3,7 +3,7 @@ import { acceptInvitation, findInvitationByTokenHash } from "@/db/queries/invita
 import { findUserByEmail } from "@/db/queries/users";
 import { CLOSED_INVITATION_WORDS, linkState, linkTokenHash } from "@/lib/auth/one-time-links";
 import { hashPassword, verifyPassword } from "@/lib/auth/password";
-import { assertSignInAllowed, clientAddress, recordFailedSignIn, recordSuccessfulSignIn } from "@/lib/auth/rate-limit";
+import { beginSignIn } from "@/lib/auth/rate-limit";
 import { getCurrentSession, startSession } from "@/lib/auth/session";
 import { badRequest, HttpError, notFound } from "@/lib/http/errors";
 import { parseWith, readJson } from "@/lib/http/body";
@@ -30,13 +30,9 @@ export const POST = route<{ token: string }>(async (req, { token }) => {
     if (user?.id !== account.id) {
       // The page does not know whether the address has an account; a "new account" form lands here too.
       if (!body.password || body.name) throw new HttpError(401, `${invitation.email} has a Farfield account already: enter its password to join.`);
-      const address = clientAddress(req);
-      await assertSignInAllowed(invitation.email, address);
-      if (!(await verifyPassword(account.passwordHash, body.password))) {
-        await recordFailedSignIn(invitation.email, address);
-        throw new HttpError(401, "Wrong password for this account.");
-      }
-      await recordSuccessfulSignIn(invitation.email);
+      const attempt = await beginSignIn(invitation.email, req);
+      if (!(await verifyPassword(account.passwordHash, body.password))) throw new HttpError(401, "Wrong password for this account.");
+      await attempt.succeeded();
     }
     who = { userId: account.id };
   } else {
