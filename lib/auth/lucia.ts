@@ -33,7 +33,8 @@ export const lucia = new Lucia(new SessionAdapter(db, sessions, users), {
   sessionExpiresIn: new TimeSpan(30, "d"),
   sessionCookie: {
     name: SESSION_COOKIE,
-    expires: false,
+    // The cookie lives as long as the session (30 days, renewed as it slides), not Lucia's 400 days.
+    expires: true,
     attributes: { secure: cookieSecure, sameSite: "lax" },
   },
   // Only these columns ever leave the server.

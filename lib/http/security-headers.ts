@@ -1,7 +1,8 @@
 // The security headers of every answer. Pages add a CSP with a per-request nonce (proxy.ts); JSON and
 // files from the API need no script, style or frame, so theirs refuses everything.
 
-const STATIC_HEADERS: Record<string, string> = {
+/** The headers every answer carries, whatever it holds (next.config.ts adds them to static files). */
+export const STATIC_HEADERS: Record<string, string> = {
   "X-Content-Type-Options": "nosniff",
   "Referrer-Policy": "strict-origin-when-cross-origin",
   "X-Frame-Options": "DENY",

@@ -1,6 +1,6 @@
 // Security headers on pages and API answers.
 import { describe, expect, it } from "vitest";
-import { APP_URL } from "../support/api";
+import { APP_URL, DEMO, signedIn } from "../support/api";
 
 function expectStaticHeaders(res: Response) {
   expect(res.headers.get("x-content-type-options")).toBe("nosniff");
@@ -48,6 +48,48 @@ describe("security headers", () => {
     expect(res.status).toBe(403);
     expect(res.headers.get("content-security-policy")).toBe("default-src 'none'; frame-ancestors 'none'");
     expectStaticHeaders(res);
+  });
+
+  it("answer a method a route does not have with a JSON 405 and the API's headers", async () => {
+    for (const [method, path] of [["DELETE", "/api/health"], ["PUT", "/api/auth/sign-in"], ["PATCH", "/api/me"]] as const) {
+      const res = await fetch(APP_URL + path, { method });
+      expect(res.status, `${method} ${path}`).toBe(405);
+      expect(res.headers.get("content-type"), method).toContain("application/json");
+      expect((await res.json()).error, method).toMatch(/does not accept that method/);
+      expect(res.headers.get("content-security-policy"), method).toBe("default-src 'none'; frame-ancestors 'none'");
+      expectStaticHeaders(res);
+    }
+  });
+
+  it("keep signed-in API answers out of every cache (Cache-Control: no-store)", async () => {
+    const c = await signedIn(DEMO.director);
+    const me = await c.get("/api/me");
+    expect(me.status).toBe(200);
+    expect(me.headers.get("cache-control")).toBe("no-store");
+    const programId = me.body.memberships[0].programId;
+    const shows = await c.get(`/api/programs/${programId}/shows`);
+    expect(shows.headers.get("cache-control")).toBe("no-store");
+    expect((await c.get("/api/no-such-thing")).headers.get("cache-control")).toBe("no-store");
+  });
+
+  it("mark /favicon.ico, fonts and built static files nosniff", async () => {
+    const html = await (await fetch(APP_URL + "/sign-in")).text();
+    const script = html.match(/\/_next\/static\/[^"']+\.js/)?.[0];
+    expect(script).toBeTruthy();
+    for (const path of ["/favicon.ico", script!, "/fonts/inter-latin-400-normal.woff2"]) {
+      const res = await fetch(APP_URL + path);
+      await res.arrayBuffer();
+      expect(res.headers.get("x-content-type-options"), path).toBe("nosniff");
+    }
+  });
+
+  it("refuse a cross-site write that names its own host in X-Forwarded-Host (no proxy is trusted)", async () => {
+    const res = await fetch(APP_URL + "/api/auth/sign-out", {
+      method: "POST",
+      headers: { origin: "https://evil.example", "x-forwarded-host": "evil.example" },
+    });
+    expect(res.status).toBe(403);
+    expect((await res.json()).error).toMatch(/Cross-site/);
   });
 
   it("gives every page answer a fresh nonce", async () => {
