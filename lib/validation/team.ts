@@ -1,14 +1,10 @@
 // Members, invitations and password resets: input shared by the forms and the route handlers.
 import { z } from "./zod";
-import { MIN_PASSWORD_LENGTH } from "@/lib/auth/password-rules";
+import { newPassword } from "./auth";
 import type { Role } from "@/lib/auth/permissions";
 
 const email = z.string().trim().toLowerCase().max(254, "That e-mail address is too long.").email("Enter a valid e-mail address.");
 const role = z.enum(["director", "designer", "staff"] satisfies Role[], { error: "Choose director, designer or staff." });
-const newPassword = z
-  .string()
-  .min(MIN_PASSWORD_LENGTH, `Use at least ${MIN_PASSWORD_LENGTH} characters.`)
-  .max(200, "That password is too long.");
 
 export const inviteSchema = z.object({ email, role });
 export const roleChangeSchema = z.object({ role });
