@@ -16,6 +16,8 @@ export const forbidden = (what = "Your role in this program may not do this.") =
 export const notFound = (what = "Not found.") => new HttpError(404, what);
 export const conflict = (message: string, extra: Record<string, unknown> = {}) => new HttpError(409, message, extra);
 export const tooLarge = (message = "The request body is too large.") => new HttpError(413, message);
+/** Well-formed, but more than a show may hold or a request may compute (lib/limits.ts). */
+export const unprocessable = (message: string) => new HttpError(422, message);
 export const tooManyAttempts = (message: string, retryAfterSeconds?: number) =>
   new HttpError(429, message, {}, retryAfterSeconds ? { "Retry-After": String(retryAfterSeconds) } : {});
 export const badRequest = (message: string, issues?: Record<string, string[]>) =>
