@@ -1,6 +1,7 @@
 // Benchmark of the acoustic engine on a generated band (run: npx tsx bench/engine.ts).
 // Prints readable figures, then as its last line one JSON object:
-//   setAnalysisMs  median analyzeSet, 300 performers × 8 bands × 3 listening points
+//   setAnalysisMs  median analyzeSet, 300 performers × 8 bands × 3 listening points (with ISO 532-1 loudness
+//                  and audibility per voice; the box with a stadium background)
 //   showSweepMs    100 sets × 16 counts of the same band (an evaluator per set, every count evaluated)
 //   kernelRatio    the evaluator's time over a bare Float64Array loop doing the same arithmetic
 import { BAND_COUNT, OCTAVE_BANDS } from "../lib/acoustics/bands";
@@ -39,7 +40,7 @@ const sets = Array.from({ length: SETS + 1 }, () => ({
 const setInput = (s: number): AnalysisInput => ({
   performers: roster.map((p, i): PerformerInput => ({ ...p, x: sets[s].x[i], y: sets[s].y[i], facingDeg: sets[s].facingDeg[i] })),
   listeningPoints: [
-    { id: "box", x: 0, y: -25, z: 18 },
+    { id: "box", x: 0, y: -25, z: 18, background: { preset: "stadium-between-bands" } },
     { id: "judge", x: 15, y: 10, z: 1.6 },
     { id: "front-row", x: -20, y: -8, z: 3 },
   ],
@@ -231,7 +232,7 @@ if (!(agreeDb < 1e-9)) throw new Error(`bare kernel and engine disagree by ${agr
 
 const round = (v: number, d = 4) => Math.round(v * 10 ** d) / 10 ** d;
 console.log(`Acoustic engine benchmark: ${PERFORMERS} performers, ${BAND_COUNT} bands, ${N} listening points (Node ${process.version})`);
-console.log(`  analyzeSet (validate, precompute, evaluate, build result): median ${round(setAnalysisMs, 3)} ms   target < 1 ms`);
+console.log(`  analyzeSet (validate, precompute, evaluate, build result, loudness): median ${round(setAnalysisMs, 3)} ms   target < 1 ms`);
 console.log(`  show sweep, ${SETS} sets × ${COUNTS} counts (${SETS * COUNTS} evaluations):   ${round(showSweepMs, 1)} ms   target < 500 ms`);
 console.log(`  evaluate() alone: median ${round(evaluateMs, 4)} ms; bare Float64Array loop: ${round(kernelMs, 4)} ms`);
 console.log(`  kernel ratio (engine / bare loop): ${round(kernelRatio, 3)}   target < 1.5   (totals agree within ${agreeDb.toExponential(1)} dB)`);

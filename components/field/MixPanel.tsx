@@ -1,6 +1,8 @@
 // The box mix at the chosen listening point: each voice as a bar with its level, the sections,
 // the total and the arrival spread. Says whether the figures are the browser's live preview or the
-// server's stored analysis, and that they are predictions.
+// server's stored analysis, and that they are predictions. With the stored analysis it also shows
+// loudness (ISO 532-1 sones) and whether each voice is heard over the rest and the background.
+import type { PointLoudness } from "@/lib/acoustics/point-loudness";
 import { VOICES, type Voice } from "@/lib/acoustics/types";
 import { VOICE_STYLES } from "./palette";
 import { SymbolIcon } from "./SymbolIcon";
@@ -10,6 +12,8 @@ export interface MixFigures {
   voices: Partial<Record<Voice, { dbA: number }>>;
   sections: Record<string, { dbA: number }>;
   arrivalSpreadMs: number;
+  /** From the stored analysis only; a live preview has none. */
+  loudness?: PointLoudness;
 }
 
 const fmt = (db: number | undefined) => (db === undefined || !Number.isFinite(db) ? "—" : db.toFixed(1));
@@ -42,20 +46,37 @@ export function MixPanel({ mix, source, pointName, computedAt }: { mix: MixFigur
           <p className="mt-2 text-3xl font-bold tabular-nums" data-testid="mix-total">
             {fmt(mix.totalDbA)} <span className="text-base font-semibold text-ink-soft">dBA total</span>
           </p>
+          {mix.loudness ? (
+            <p className="text-sm text-ink-soft" data-testid="mix-loudness">
+              Perceived <span className="font-semibold tabular-nums text-ink">{mix.loudness.totalSone.toFixed(1)} sone</span> (
+              {mix.loudness.totalPhon.toFixed(0)} phon){mix.loudness.backgroundSone > 0 ? `, background ${mix.loudness.backgroundSone.toFixed(1)} sone` : ""}
+            </p>
+          ) : null}
           <p className="text-sm text-ink-soft">
             Arrival spread <span className="font-semibold tabular-nums text-ink">{mix.arrivalSpreadMs.toFixed(0)} ms</span> between the nearest and the farthest player
           </p>
           <ul className="mt-3 space-y-1.5" aria-label="Voices">
-            {VOICES.map((v) => (
-              <li key={v} className="grid grid-cols-[8.5rem_1fr_3.2rem] items-center gap-2 text-sm" data-testid={`voice-${v}`} data-db={mix.voices[v]?.dbA ?? ""}>
-                <span className="inline-flex items-center gap-1.5">
-                  <SymbolIcon shape="circle" style={VOICE_STYLES[v]} size={14} />
-                  {VOICE_STYLES[v].name}
-                </span>
-                <Bar value={mix.voices[v]?.dbA} top={mix.totalDbA} colour={VOICE_STYLES[v].colour} />
-                <span className="text-right font-semibold tabular-nums">{fmt(mix.voices[v]?.dbA)}</span>
-              </li>
-            ))}
+            {VOICES.map((v) => {
+              const loud = mix.loudness?.voices[v];
+              return (
+                <li key={v} className="text-sm" data-testid={`voice-${v}`} data-db={mix.voices[v]?.dbA ?? ""} data-heard={loud ? String(loud.heard) : ""}>
+                  <div className="grid grid-cols-[8.5rem_1fr_3.2rem] items-center gap-2">
+                    <span className="inline-flex items-center gap-1.5">
+                      <SymbolIcon shape="circle" style={VOICE_STYLES[v]} size={14} />
+                      {VOICE_STYLES[v].name}
+                    </span>
+                    <Bar value={mix.voices[v]?.dbA} top={mix.totalDbA} colour={VOICE_STYLES[v].colour} />
+                    <span className="text-right font-semibold tabular-nums">{fmt(mix.voices[v]?.dbA)}</span>
+                  </div>
+                  {loud ? (
+                    <p className="pl-[1.4rem] text-xs text-ink-soft">
+                      <span className="tabular-nums">{loud.sone.toFixed(1)} sone</span>, adds <span className="tabular-nums">{loud.shareSone.toFixed(1)}</span> to the whole ·{" "}
+                      {loud.heard ? <span className="font-semibold text-turf-dark">heard</span> : <span className="font-semibold text-signal-warn">masked</span>}
+                    </p>
+                  ) : null}
+                </li>
+              );
+            })}
           </ul>
           <details className="mt-3" open>
             <summary className="cursor-pointer text-sm font-semibold">Sections</summary>
@@ -74,7 +95,7 @@ export function MixPanel({ mix, source, pointName, computedAt }: { mix: MixFigur
         <p className="mt-3 text-ink-soft">Computing the mix…</p>
       )}
       <p className="mt-3 text-xs text-ink-soft">
-        Predicted levels (dBA) from the acoustic model, not measurements. {source === "stored" && computedAt ? `Stored ${new Date(computedAt).toLocaleTimeString()}.` : null}{" "}
+        Predicted levels (dBA) and loudness (sones, ISO 532-1) from the acoustic model, not measurements; “heard” judges masking by the rest of the band and the background only. {source === "stored" && computedAt ? `Stored ${new Date(computedAt).toLocaleTimeString()}.` : null}{" "}
         Levels among the players are far higher than at the box: protect hearing and follow local rules.
       </p>
     </section>

@@ -56,24 +56,39 @@ export function criticalBandLevelsInto(thirdOctaveDb: ArrayLike<number>, out: Fl
   }
 }
 
+// Spread contributions below this level (dB SPL) are skipped: even all twenty of them together
+// stay under the threshold in quiet, so no result changes.
+const SPREAD_FLOOR_DB = -20;
+// Downward spread as an energy factor per (band i, masker band j ≥ i): 10^(−2.7·(z_j − z_i)).
+const LOWER_FACTOR = Float64Array.from({ length: CB * CB }, (_, k) => {
+  const i = Math.floor(k / CB), j = k % CB;
+  return j >= i ? Math.exp(-LOWER_SLOPE_DB_PER_BARK * (CRITICAL_BAND_CENTRE_BARK[j] - CRITICAL_BAND_CENTRE_BARK[i]) * LN10_10) : 0;
+});
+const MASKING_INDEX_DB = Float64Array.from(CRITICAL_BAND_CENTRE_BARK, (z) => maskingIndexDb(z));
+const spreadEnergy = new Float64Array(CB);
+
 /** Writes the masked threshold (dB) in each critical band of a masker given by its critical-band levels into `out`. */
 export function maskedThresholdInto(maskerCbDb: ArrayLike<number>, out: Float64Array): void {
-  for (let i = 0; i < CB; i++) {
-    let e = 0;
-    for (let j = 0; j < CB; j++) {
-      const l = maskerCbDb[j];
-      if (!(l > -Infinity)) continue;
-      const dz = CRITICAL_BAND_CENTRE_BARK[i] - CRITICAL_BAND_CENTRE_BARK[j];
-      let spread: number;
-      if (dz < 0) spread = LOWER_SLOPE_DB_PER_BARK * dz;
-      else {
-        const upper = 24 + 230 / CRITICAL_BAND_CENTRE_HZ[j] - 0.2 * l;
-        spread = -(upper > 0 ? upper : 0) * dz;
-      }
-      e += Math.exp((l + spread) * LN10_10);
+  spreadEnergy.fill(0);
+  for (let j = 0; j < CB; j++) {
+    const l = maskerCbDb[j];
+    if (!(l > -Infinity)) continue;
+    const zj = CRITICAL_BAND_CENTRE_BARK[j];
+    const ej = Math.exp(l * LN10_10);
+    // Its own band and downward: 27 dB per Bark.
+    for (let i = j; i >= 0 && l - LOWER_SLOPE_DB_PER_BARK * (zj - CRITICAL_BAND_CENTRE_BARK[i]) >= SPREAD_FLOOR_DB; i--) {
+      spreadEnergy[i] += ej * LOWER_FACTOR[i * CB + j];
     }
-    out[i] = 10 * Math.log10(e) + maskingIndexDb(CRITICAL_BAND_CENTRE_BARK[i]);
+    // Upward: 24 + 230 Hz/f − 0.2·L dB per Bark, never rising.
+    let slope = 24 + 230 / CRITICAL_BAND_CENTRE_HZ[j] - 0.2 * l;
+    if (slope < 0) slope = 0;
+    for (let i = j + 1; i < CB; i++) {
+      const level = l - slope * (CRITICAL_BAND_CENTRE_BARK[i] - zj);
+      if (level < SPREAD_FLOOR_DB) break;
+      spreadEnergy[i] += Math.exp(level * LN10_10);
+    }
   }
+  for (let i = 0; i < CB; i++) out[i] = 10 * Math.log10(spreadEnergy[i]) + MASKING_INDEX_DB[i];
 }
 
 export interface Audibility {

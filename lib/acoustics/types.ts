@@ -2,6 +2,8 @@
 // front sideline at the 50-yard line, x toward side 2, y toward the back sideline, z up),
 // degrees for facing (0 = toward the front sideline, 90 = toward side 2, 180 = toward the
 // back sideline, 270 = toward side 1), °C, % RH, kPa, dB, ms.
+import type { Background } from "./background";
+import type { PointLoudness } from "./point-loudness";
 
 export const DYNAMICS = ["pp", "p", "mp", "mf", "f", "ff", "fff"] as const;
 export type Dynamic = (typeof DYNAMICS)[number];
@@ -73,6 +75,8 @@ export interface ListeningPointInput {
   groundFactor?: number | null;
   /** How far (m, on the ground) that ground reaches from the point toward the field; 0 when omitted. */
   surroundingsM?: number;
+  /** What the point hears besides the band (none when absent). */
+  background?: Background | null;
 }
 
 export interface AnalysisInput {
@@ -99,6 +103,8 @@ export interface PointResult {
   sections: Record<string, LevelSummary>;
   performers: PerformerResult[];
   arrivalSpreadMs: number;
+  /** Loudness of the band and each voice, with the point's background (analyzeSet only). */
+  loudness?: PointLoudness;
 }
 
 export interface AnalysisResult {

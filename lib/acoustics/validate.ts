@@ -1,5 +1,6 @@
 // Checks of analysis input; every error names its field, e.g. `performers[3].x`.
 import { validateAir } from "./atmosphere";
+import { validateBackground } from "./background";
 import { AcousticsInputError, requireFinite, requireInRange } from "./errors";
 import { DYNAMICS, VOICES, type Conditions, type ListeningPointInput, type PerformerInput } from "./types";
 
@@ -60,7 +61,7 @@ export function validatePerformers(performers: readonly PerformerInput[], hasIns
   }
 }
 
-/** Throws unless every listening point has an id and finite coordinates at or above the ground. */
+/** Throws unless every listening point has an id, finite coordinates at or above the ground and a valid background. */
 export function validateListeningPoints(points: readonly ListeningPointInput[]): void {
   if (!Array.isArray(points)) throw new AcousticsInputError("listeningPoints", "must be an array");
   points.forEach((pt, i) => {
@@ -74,6 +75,7 @@ export function validateListeningPoints(points: readonly ListeningPointInput[]):
     if (pt.surroundingsM !== undefined && requireFinite(pt.surroundingsM, `${f}.surroundingsM`) < 0) {
       throw new AcousticsInputError(`${f}.surroundingsM`, "must not be negative");
     }
+    validateBackground(pt.background, `${f}.background`);
   });
   requireUnique(points.map((p) => p.id), "listeningPoints");
 }

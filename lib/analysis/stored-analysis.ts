@@ -39,7 +39,7 @@ export function computeBalance(
   const point = played.listeningPoints.find((l) => l.id === listeningPointId)!;
   const pr = analyzeSet({ ...played, listeningPoints: [point] }).points[0]!;
   const plan = solveBalancePlan([{ ...written, listeningPoints: [point] }], listeningPointId, targets, undefined, limits);
-  return toJsonSafe({ mix: mixOf(pr), checks: checkBalance(played, pr, targets), plan: plan.entries, planUnmet: plan.unmet });
+  return toJsonSafe({ mix: mixOf(pr), loudness: pr.loudness, checks: checkBalance(played, pr, targets), plan: plan.entries, planUnmet: plan.unmet });
 }
 
 export type StoredBalance = ReturnType<typeof computeBalance>;

@@ -257,6 +257,24 @@ describe("field editor", () => {
     expect(problems).toEqual([]);
   });
 
+  it("the stored box mix shows the band's loudness in sones and, for each sounding voice, heard or masked in words", async () => {
+    const { page, problems } = await open(DEMO.staff);
+    await openSet(page, ids.showId, ids.setIds[6]);
+    expect(await page.locator('[data-testid="mix-loudness"]').textContent()).toMatch(/Perceived [\d.]+ sone \(\d+ phon\)/);
+    let sounding = 0;
+    for (const v of ["melody", "countermelody", "accompaniment", "bass", "percussion"]) {
+      const row = page.locator(`[data-testid="voice-${v}"]`);
+      if (!(await row.getAttribute("data-db"))) continue;
+      sounding++;
+      const heard = await row.getAttribute("data-heard");
+      expect(["true", "false"]).toContain(heard);
+      expect(await row.textContent()).toMatch(heard === "true" ? /sone, adds [\d.]+ to the whole · heard/ : /masked/);
+    }
+    expect(sounding).toBeGreaterThan(0);
+    await page.locator('[data-testid="mix-panel"]').screenshot({ path: path.join(SHOTS, "editor-mix-loudness.png") });
+    expect(problems).toEqual([]);
+  });
+
   it("fits a tablet-size window (820 × 1180)", async () => {
     const { page, problems } = await open(DEMO.designer, { width: 820, height: 1180 });
     await openSet(page, ids.showId, ids.setIds[4]);

@@ -136,7 +136,7 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
 
   const previewMix = useMemo(() => (preview ? preview.mixFor(shown) : null), [preview, shown]);
   const stored = analysis.data && !saver.dirty && shownCount === null && mixInput.data && !mixInput.isValidating ? analysis.data : null;
-  const mix: MixFigures | null = stored ? stored.mix : previewMix;
+  const mix: MixFigures | null = useMemo(() => (stored ? { ...stored.mix, loudness: stored.loudness } : previewMix), [stored, previewMix]);
   const perPerformer: Record<string, number> = useMemo(() => {
     if (stored) return Object.fromEntries(stored.mix.performers.flatMap((p) => (p.dbA === null ? [] : [[p.performerId, p.dbA]])));
     return previewMix?.performers ?? {};
