@@ -59,7 +59,7 @@ describe("GET analysis: checks and plan", () => {
   });
 });
 
-// The analysis answer's loudness (ISO 532-1, model version 2).
+// The analysis answer's loudness (ISO 532-1, model version 3).
 describe("GET analysis: loudness at the listening point", () => {
   it("answers the band's sones and phons and, for every voice in the mix, its sones, share and whether it is heard", async () => {
     const res = await staff.get(analysisPath("7"));

@@ -14,7 +14,7 @@ export type AnalysisResponse = {
   computedAt: string;
   reused: boolean;
   mix: MixFigures & { performers: { performerId: string; dbA: number | null; arrivalMs: number }[] };
-  /** Added with model version 2; absent from older stored answers. */
+  /** Added with model version 3; absent from older stored answers. */
   loudness?: MixFigures["loudness"];
   checks: CheckResult[];
   plan: (PlanEntry & { atLimit?: Extract<Dynamic, "pp" | "fff">; unreachable?: string[] })[];
