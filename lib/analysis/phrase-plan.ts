@@ -20,11 +20,17 @@ function summary(input: AnalysisInput, point: PointResult, targets: ShowBalance[
   };
 }
 
-export function phrasePlan(sb: ShowBalance, phraseId: string, listeningPointId: string) {
+/** The phrase and the listening point a plan is for; 404 when either is not in the show. */
+export function planSubject(sb: ShowBalance, phraseId: string, listeningPointId: string) {
   const phrase = sb.music.phrases.find((p) => p.id === phraseId);
   if (!phrase) throw notFound("No such phrase.");
   const point = sb.listeningPoints.find((l) => l.id === listeningPointId);
   if (!point) throw notFound("No such listening point in this show.");
+  return { phrase, point };
+}
+
+export function phrasePlan(sb: ShowBalance, phraseId: string, listeningPointId: string) {
+  const { phrase, point } = planSubject(sb, phraseId, listeningPointId);
   const lp = [{ id: point.id, x: point.x, y: point.y, z: point.z }];
   const sets = sb.sets.filter((s) => s.order >= phrase.firstOrder && s.order <= phrase.lastOrder && s.positions.length > 0);
   const inputs = sets.map((s) => {

@@ -1,10 +1,11 @@
 // The whole-show computations the server runs in worker threads (lib/heavy/pool.ts), by name. This
 // module is the workers' entry point: it and all it imports must be pure (no framework, no database).
 import { hearingMap } from "@/lib/acoustics/hearing";
+import { phrasePlan } from "@/lib/analysis/phrase-plan";
 import { staleSweeps } from "@/lib/analysis/show-sweeps";
 import { readShowFile } from "@/lib/show-file/read";
 
-export const HEAVY_TASKS = { staleSweeps, hearingMap, readShowFile };
+export const HEAVY_TASKS = { staleSweeps, hearingMap, readShowFile, phrasePlan };
 
 export type HeavyTask = keyof typeof HEAVY_TASKS;
 export type HeavyArgs<K extends HeavyTask> = Parameters<(typeof HEAVY_TASKS)[K]>;

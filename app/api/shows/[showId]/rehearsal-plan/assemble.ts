@@ -4,7 +4,7 @@ import { loadMusic } from "@/db/queries/music";
 import { findProgram } from "@/db/queries/programs";
 import { listListeningPoints, listSets } from "@/db/queries/shows";
 import type { Show } from "@/db/schema";
-import { phrasePlan } from "@/lib/analysis/phrase-plan";
+import { runPhrasePlan } from "@/lib/analysis/run-phrase-plan";
 import { loadShowBalance } from "@/lib/analysis/show-context";
 import { storedAnalysis } from "@/lib/analysis/stored-analysis";
 import { describePosition } from "@/lib/field/words";
@@ -39,10 +39,10 @@ export async function assembleRehearsalPlan(show: Show, choice: RehearsalChoice)
   // The same plan and words as the music page: each phrase's plan over all its sets.
   const balance = choice.phraseIds.length || choice.setIds.length ? await loadShowBalance(show) : null;
   const plans = new Map<string, RehearsalItemInput["plan"]>();
-  const planOf = (phraseId: string | undefined) => {
+  const planOf = async (phraseId: string | undefined) => {
     if (!phraseId || !balance) return undefined;
     if (!plans.has(phraseId)) {
-      const p = phrasePlan(balance, phraseId, point.id);
+      const p = await runPhrasePlan(balance, phraseId, point.id);
       plans.set(phraseId, { entries: p.entries, unmet: p.unmet.map((u) => u.detail) });
     }
     return plans.get(phraseId);
@@ -51,7 +51,7 @@ export async function assembleRehearsalPlan(show: Show, choice: RehearsalChoice)
   const items: RehearsalItemInput[] = [];
   for (const phrase of music.phrases.filter((p) => choice.phraseIds.includes(p.id))) {
     const span = sets.filter((s) => s.order >= phrase.firstOrder && s.order <= phrase.lastOrder);
-    items.push({ kind: "phrase", name: phrase.name, sets: await Promise.all(span.map(analysisOf)), sections: sectionsOf(phrase.id), plan: planOf(phrase.id) });
+    items.push({ kind: "phrase", name: phrase.name, sets: await Promise.all(span.map(analysisOf)), sections: sectionsOf(phrase.id), plan: await planOf(phrase.id) });
   }
   for (const set of sets.filter((s) => choice.setIds.includes(s.id))) {
     const phrase = phraseAt(music.phrases, set.order);
@@ -61,7 +61,7 @@ export async function assembleRehearsalPlan(show: Show, choice: RehearsalChoice)
       name: `Set ${set.number}${phrase ? ` (in ${phrase.name})` : ""}`,
       sets: [await analysisOf(set)],
       sections: sections.length ? sections : [],
-      plan: planOf(phrase?.id),
+      plan: await planOf(phrase?.id),
     });
   }
   const where = describePosition(point.x, point.y, show.fieldRules);

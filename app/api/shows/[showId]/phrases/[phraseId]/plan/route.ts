@@ -2,7 +2,7 @@ import { NextResponse } from "next/server";
 import { z } from "zod";
 import { findPhrase } from "@/db/queries/music-edit";
 import { adoptPlan, clearPlan } from "@/db/queries/plan-adoption";
-import { phrasePlan } from "@/lib/analysis/phrase-plan";
+import { runPhrasePlan } from "@/lib/analysis/run-phrase-plan";
 import { loadShowBalance } from "@/lib/analysis/show-context";
 import { requireShow } from "@/lib/auth/access";
 import { parseWith, readJson } from "@/lib/http/body";
@@ -15,7 +15,7 @@ const query = z.object({ listeningPointId: z.string().uuid("listeningPointId mus
 
 async function proposal(show: Parameters<typeof loadShowBalance>[0], phraseId: string, listeningPointId: string) {
   if (!idSchema.safeParse(phraseId).success) throw notFound("No such phrase.");
-  return phrasePlan(await loadShowBalance(show), phraseId, listeningPointId);
+  return runPhrasePlan(await loadShowBalance(show), phraseId, listeningPointId);
 }
 
 /** The proposed plan for the phrase, with each set's mix and checks before and after. */
