@@ -1,5 +1,5 @@
 // Tables of ISO 532-1:2017 (Zwicker method, stationary signals), Annex A, as numbers only.
-// Transcribed from two independent public transcriptions of the standard's annex program, which
+// Transcribed from two independent public copies of the standard's annex program, which
 // agree value for value:
 //   ggrecow/SQAT psychoacoustic_metrics/Loudness_ISO532_1/Loudness_ISO532_1.m
 //     @ 069dc3217202839d8b7c363e52bcc082ec6d6478 (tables A.3–A.9, named there)

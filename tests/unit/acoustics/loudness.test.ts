@@ -32,7 +32,7 @@ describe("loudnessIso532_1: the standard's stationary test signals (ISO 532-1:20
     expect(Math.abs(phon - REFERENCE.signal1.phon)).toBeLessThan(0.001);
   });
 
-  it("the filter bank used to turn the pure-tone signals into band levels passes each band's own centre at 0 dB (transcription check of Tables A.1/A.2)", () => {
+  it("the filter bank used to turn the pure-tone signals into band levels passes each band's own centre at 0 dB (checks our copy of Tables A.1/A.2)", () => {
     for (let band = 0; band < 28; band++) {
       const centre = 1000 * 10 ** ((band - 16) / 10); // IEC 61260-1 base-10 centres
       expect(Math.abs(filterGainDb(band, centre))).toBeLessThan(0.01);
