@@ -1,8 +1,26 @@
 // analyzeSet: the box mix of one set at every listening point.
 import { backgroundThirdOctaves } from "./background";
+import { catalogOf } from "./box-players";
 import { createSetEvaluator } from "./evaluator";
 import { pointLoudness } from "./point-loudness";
-import type { AnalysisInput, AnalysisResult } from "./types";
+import type { AnalysisInput, AnalysisResult, PointResult } from "./types";
+
+/** Families whose sound masks as noise rather than as tones (audibility.ts): the battery's drums and cymbals. */
+export const NOISE_LIKE_FAMILIES: readonly string[] = ["percussion"];
+
+/** Per voice, the octave levels (dB) of its noise-like players at a point; voices without any are absent. */
+export function noiseLikeVoiceBands(input: AnalysisInput, point: PointResult): Record<string, number[]> {
+  const catalog = catalogOf(input);
+  const byId = new Map(point.performers.map((p) => [p.id, p]));
+  const energy: Record<string, number[]> = {};
+  for (const perf of input.performers) {
+    const res = byId.get(perf.id);
+    if (perf.voice === "tacet" || !res || !NOISE_LIKE_FAMILIES.includes(catalog[perf.instrument]?.family ?? "")) continue;
+    const e = (energy[perf.voice] ??= res.bandsDb.map(() => 0));
+    res.bandsDb.forEach((l, b) => (e[b] += 10 ** (l / 10)));
+  }
+  return Object.fromEntries(Object.entries(energy).map(([voice, e]) => [voice, e.map((x) => 10 * Math.log10(x))]));
+}
 
 /**
  * Predicted levels of every performer, section, voice and the whole band at each listening
@@ -19,7 +37,7 @@ export function analyzeSet(input: AnalysisInput): AnalysisResult {
   result.points.forEach((point, n) => {
     const voiceBands: Record<string, number[]> = {};
     for (const [voice, level] of Object.entries(point.voices)) if (level) voiceBands[voice] = level.bandsDb;
-    point.loudness = pointLoudness(voiceBands, backgroundThirdOctaves(input.listeningPoints[n].background));
+    point.loudness = pointLoudness(voiceBands, backgroundThirdOctaves(input.listeningPoints[n].background), "free", noiseLikeVoiceBands(input, point));
   });
   return result;
 }

@@ -2,8 +2,10 @@
 // the point's background: totals and per-voice loudness by ISO 532-1 (loudness.ts) on third-octaves
 // derived from the octave bands (third-octaves.ts); each voice's share of the whole (loudness of
 // everything with it minus without it, background included); and whether it is heard at all over
-// the rest of the band and the background (audibility.ts).
-import { audibility, criticalBandLevelsInto, maskedThresholdInto } from "./audibility";
+// the rest of the band and the background (audibility.ts): the band's pitched players mask as tones,
+// its drums and cymbals and the background as noise.
+import { audibility, criticalBandLevelsInto, globalMaskedThresholdInto } from "./audibility";
+import { BAND_COUNT } from "./bands";
 import { loudnessIso532_1, soneToPhon, type SoundField } from "./loudness";
 import { CORE_BAND_COUNT, THIRD_OCTAVE_COUNT } from "./loudness-tables";
 import { thirdOctavesFromOctavesInto } from "./third-octaves";
@@ -36,13 +38,22 @@ const toDb = (e: number) => 10 * Math.log10(e);
 /**
  * Loudness at a listening point. `voiceOctaveDb` maps each sounding voice to its 8 octave levels
  * (63 Hz … 8 kHz, dB SPL); `backgroundThirdOctaveDb` is the point's 28 background levels (all
- * −Infinity for none). Voices whose every band is silent are left out.
+ * −Infinity for none). `noiseLikeOctaveDb` gives, per voice, the part of its levels played by
+ * noise-like sources (drums, cymbals); the rest masks as tones. Voices whose every band is silent are left out.
  */
-export function pointLoudness(voiceOctaveDb: Record<string, ArrayLike<number>>, backgroundThirdOctaveDb: ArrayLike<number>, field: SoundField = "free"): PointLoudness {
+export function pointLoudness(
+  voiceOctaveDb: Record<string, ArrayLike<number>>,
+  backgroundThirdOctaveDb: ArrayLike<number>,
+  field: SoundField = "free",
+  noiseLikeOctaveDb: Record<string, ArrayLike<number>> = {},
+): PointLoudness {
   const names = Object.keys(voiceOctaveDb);
   const V = names.length;
   const thirds = new Float64Array(T);
   const energy = new Float64Array(V * T); // per voice, per third-octave
+  const noise = new Float64Array(V * T); // its noise-like part
+  const tonal = new Float64Array(V * T); // its tonal part
+  const octave = new Float64Array(BAND_COUNT);
   const all = new Float64Array(T);
   const bg = new Float64Array(T);
   for (let t = 0; t < T; t++) bg[t] = Math.exp(backgroundThirdOctaveDb[t] * LN10_10);
@@ -57,6 +68,19 @@ export function pointLoudness(voiceOctaveDb: Record<string, ArrayLike<number>>, 
       if (e > 0) any = true;
     }
     if (any) sounding.push(v);
+    const noisy = noiseLikeOctaveDb[names[v]];
+    if (!noisy) {
+      tonal.set(energy.subarray(v * T, (v + 1) * T), v * T);
+      continue;
+    }
+    // Each part's thirds from its own octaves (the derivation follows a spectrum's slope, so the parts are derived apart).
+    for (const [part, levels] of [
+      [noise, noisy],
+      [tonal, Array.from(octave, (_, b) => toDb(Math.max(0, Math.exp(voiceOctaveDb[names[v]][b] * LN10_10) - Math.exp(noisy[b] * LN10_10))))],
+    ] as const) {
+      thirdOctavesFromOctavesInto(levels, thirds);
+      for (let t = 0; t < T; t++) part[v * T + t] = Math.exp(thirds[t] * LN10_10);
+    }
   }
   const levels = new Float64Array(T);
   const loudnessOf = (fill: (t: number) => number) => {
@@ -68,6 +92,7 @@ export function pointLoudness(voiceOctaveDb: Record<string, ArrayLike<number>>, 
   const wholeSone = loudnessOf((t) => all[t] + bg[t]);
 
   const cb = new Float64Array(CORE_BAND_COUNT);
+  const tonalCb = new Float64Array(CORE_BAND_COUNT);
   const threshold = new Float64Array(CORE_BAND_COUNT);
   const voices: Record<string, VoiceLoudness> = {};
   for (const v of sounding) {
@@ -79,9 +104,17 @@ export function pointLoudness(voiceOctaveDb: Record<string, ArrayLike<number>>, 
       return e;
     };
     const withoutSone = loudnessOf(restOf);
-    for (let t = 0; t < T; t++) levels[t] = toDb(restOf(t));
+    // The masker: the rest's tonal part, and its noise-like part with the background.
+    const partOfRest = (part: Float64Array, t: number) => {
+      let e = 0;
+      for (const u of sounding) if (u !== v) e += part[u * T + t];
+      return e;
+    };
+    for (let t = 0; t < T; t++) levels[t] = toDb(partOfRest(tonal, t));
+    criticalBandLevelsInto(levels, tonalCb);
+    for (let t = 0; t < T; t++) levels[t] = toDb(partOfRest(noise, t) + bg[t]);
     criticalBandLevelsInto(levels, cb);
-    maskedThresholdInto(cb, threshold);
+    globalMaskedThresholdInto(tonalCb, cb, threshold);
     for (let t = 0; t < T; t++) levels[t] = toDb(energy[v * T + t]);
     criticalBandLevelsInto(levels, cb);
     const heard = audibility(cb, threshold);
