@@ -1,6 +1,7 @@
 // The roster CSV: label, instrument, section, part, strength, name (optional). Rows are matched to
 // the show's performers by label: a new label is created, a known one changed where it differs;
 // performers missing from the file stay as they are. Pure.
+import { LABEL_PATTERN } from "@/lib/validation/performers";
 import { readCsvTable, type LineError } from "./csv-table";
 
 export const ROSTER_COLUMNS = ["label", "instrument", "section", "part", "strength", "name"] as const;
@@ -41,8 +42,6 @@ export interface RosterPlan {
   errors: LineError[];
 }
 
-/** A performer's label as the roster accepts it (also the show file's). */
-export const LABEL_PATTERN = /^[A-Za-z0-9][A-Za-z0-9 ._\-]{0,15}$/;
 const FIELDS: Field[] = ["instrument", "section", "part", "strengthDb", "name"];
 
 function readEntry(line: number, c: Record<string, string>, instruments: Map<string, string>): RosterEntry | string[] {

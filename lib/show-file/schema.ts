@@ -1,10 +1,9 @@
 // The show file: one versioned JSON document holding a whole show without any database ids, so a
 // show exported, imported and exported again gives the same document. Each part is checked with the
 // schema of the route that writes the same thing, and unknown keys are refused. Pure (zod).
-import { LABEL_PATTERN } from "@/lib/imports/roster";
 import { listeningPointSchema } from "@/lib/validation/listening-points";
 import { dynamicSchema, overrideSchema, phraseSchema, voiceSchema } from "@/lib/validation/music";
-import { addPerformersSchema } from "@/lib/validation/performers";
+import { performerFields } from "@/lib/validation/performers";
 import { planLimitsSchema } from "@/lib/validation/plan-limits";
 import { positionSchema } from "@/lib/validation/positions";
 import { countsSchema, setNumberSchema } from "@/lib/validation/sets";
@@ -15,8 +14,8 @@ import { z } from "@/lib/validation/zod";
 export const SHOW_FILE_FORMAT = "farfield-show";
 export const SHOW_FILE_VERSION = 1;
 
-const label = z.string().regex(LABEL_PATTERN, "A label is 1–16 letters or digits, e.g. T4.");
-const section = addPerformersSchema.shape.section.unwrap();
+const { label, section } = performerFields;
+
 
 export const showFileSchema = z
   .object({
@@ -35,11 +34,7 @@ export const showFileSchema = z
     performers: z.array(
       z
         .object({
-          label,
-          instrument: addPerformersSchema.shape.instrument,
-          section,
-          part: addPerformersSchema.shape.part,
-          strengthDb: addPerformersSchema.shape.strengthDb,
+          ...performerFields,
           name: z.string().max(120, "That name is too long.").nullable(),
         })
         .strict(),

@@ -75,6 +75,8 @@ const RULES: Record<string, Rule> = {
   "POST shows/[showId]/phrases/[phraseId]/plan": { roles: DIRECTORS, body: "json" },
   "DELETE shows/[showId]/phrases/[phraseId]/plan": { roles: DIRECTORS, body: "none" },
   "POST shows/[showId]/performers": { roles: EDITORS, body: "json" },
+  "PATCH shows/[showId]/performers/[performerId]": { roles: EDITORS, body: "json" },
+  "DELETE shows/[showId]/performers/[performerId]": { roles: EDITORS, body: "none" },
   "GET shows/[showId]/readings": { roles: ALL },
   "POST shows/[showId]/readings": { roles: ALL, body: "json" },
   "POST shows/[showId]/readings/upload": { roles: ALL, body: "multipart" },

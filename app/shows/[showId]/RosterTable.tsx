@@ -1,9 +1,18 @@
 "use client";
-// The show's roster, sortable by label, instrument, section, part or strength, with a count per section.
+// The show's roster, sortable by label, name, instrument, section, part or strength, with a count per section;
+// editors add performers, and change or remove one from its row.
+import { useState } from "react";
+import { useSWRConfig } from "swr";
 import type { Performer } from "@/components/api-types";
+import { Button } from "@/components/Button";
 import { EmptyState } from "@/components/EmptyState";
-import { humanize, signedDb } from "@/components/format";
+import { FormMessage } from "@/components/FormMessage";
+import { signedDb } from "@/components/format";
 import { SortableTable, type Column } from "@/components/SortableTable";
+import { apiKeys } from "@/components/use-api";
+import { AddPerformersForm } from "./AddPerformersForm";
+import { instrumentName } from "./instrument-options";
+import { PerformerForm } from "./PerformerForm";
 
 function strengthWord(db: number): string {
   if (db <= -1) return "weaker";
@@ -11,11 +20,14 @@ function strengthWord(db: number): string {
   return "even";
 }
 
+const none = <span className="text-ink-faint">—</span>;
+
 const COLUMNS: Column<Performer>[] = [
   { key: "label", header: "Label", sortValue: (p) => p.label, render: (p) => <span className="font-semibold">{p.label}</span> },
-  { key: "instrument", header: "Instrument", sortValue: (p) => humanize(p.instrument) },
+  { key: "name", header: "Name", sortValue: (p) => p.name ?? "", render: (p) => p.name || none },
+  { key: "instrument", header: "Instrument", sortValue: (p) => instrumentName(p.instrument), render: (p) => instrumentName(p.instrument) },
   { key: "section", header: "Section", sortValue: (p) => p.section },
-  { key: "part", header: "Part", sortValue: (p) => p.part, render: (p) => p.part || <span className="text-ink-faint">—</span> },
+  { key: "part", header: "Part", sortValue: (p) => p.part, render: (p) => p.part || none },
   {
     key: "strength",
     header: "Strength",
@@ -29,21 +41,67 @@ const COLUMNS: Column<Performer>[] = [
   },
 ];
 
-export function RosterTable({ performers }: { performers: Performer[] }) {
-  if (performers.length === 0) return <EmptyState title="No performers yet">The drill designer builds the roster in the field editor.</EmptyState>;
+export function RosterTable({ showId, performers, editable }: { showId: string; performers: Performer[]; editable: boolean }) {
+  const { mutate } = useSWRConfig();
+  const [editing, setEditing] = useState<string | null>(null);
+  const [status, setStatus] = useState("");
+  const refresh = () => mutate(apiKeys.show(showId));
   const sections = new Map<string, number>();
   for (const p of performers) sections.set(p.section, (sections.get(p.section) ?? 0) + 1);
+  const chosen = performers.find((p) => p.id === editing) ?? null;
+  const columns: Column<Performer>[] = editable
+    ? [
+        ...COLUMNS,
+        {
+          key: "edit",
+          header: "Change",
+          sortValue: (p) => p.label,
+          render: (p) => (
+            <Button variant="quiet" className="min-h-9 px-2 py-0" aria-label={`Edit ${p.label}`} onClick={() => setEditing(p.id)}>
+              Edit
+            </Button>
+          ),
+        },
+      ]
+    : COLUMNS;
+
   return (
     <div className="space-y-4">
-      <ul className="flex flex-wrap gap-2" aria-label="Performers per section">
-        {[...sections].map(([section, n]) => (
-          <li key={section} className="rounded-full border border-ink/15 bg-paper px-3 py-1 text-sm">
-            <span className="font-semibold">{section}</span> <span className="tabular-nums text-ink-soft">{n}</span>
-          </li>
-        ))}
-      </ul>
-      <SortableTable caption="Roster" columns={COLUMNS} rows={performers} rowKey={(p) => p.id} initialSort="section" />
-      <p className="text-sm text-ink-soft">Strength is a player&rsquo;s own offset from their instrument&rsquo;s level, from −6 dB (weak) to +6 dB (strong).</p>
+      <datalist id="roster-sections">
+        {[...sections.keys()].map((s) => <option key={s} value={s} />)}
+      </datalist>
+      {performers.length === 0 ? (
+        <EmptyState title="No performers yet">
+          {editable ? "Add the band by instrument below; then place them on the field in the set editor." : "The drill designer or the director builds the roster."}
+        </EmptyState>
+      ) : (
+        <>
+          <ul className="flex flex-wrap gap-2" aria-label="Performers per section">
+            {[...sections].map(([section, n]) => (
+              <li key={section} className="rounded-full border border-ink/15 bg-paper px-3 py-1 text-sm">
+                <span className="font-semibold">{section}</span> <span className="tabular-nums text-ink-soft">{n}</span>
+              </li>
+            ))}
+          </ul>
+          {chosen ? (
+            <PerformerForm
+              key={chosen.id}
+              showId={showId}
+              performer={chosen}
+              onCancel={() => setEditing(null)}
+              onDone={async (message) => {
+                await refresh();
+                setEditing(null);
+                setStatus(message);
+              }}
+            />
+          ) : null}
+          <FormMessage id="roster-status" tone="info">{status}</FormMessage>
+          <SortableTable caption="Roster" columns={columns} rows={performers} rowKey={(p) => p.id} initialSort="section" />
+          <p className="text-sm text-ink-soft">Strength is a player&rsquo;s own offset from their instrument&rsquo;s level, from −6 dB (weak) to +6 dB (strong).</p>
+        </>
+      )}
+      {editable ? <AddPerformersForm showId={showId} onAdded={refresh} /> : null}
     </div>
   );
 }

@@ -66,7 +66,7 @@ export function ShowOverview({ showId }: { showId: string }) {
           </Card>
         </div>
         <Card title={`Roster (${performers.length})`} titleId="roster-title">
-          <RosterTable performers={performers} />
+          <RosterTable showId={s.id} performers={performers} editable={can(role, "edit-drill")} />
         </Card>
       </div>
     </>

@@ -1,16 +1,20 @@
 "use client";
 // The show's music: phrases over the sets; per phrase, each section's voice and dynamics, overrides and the balance plan.
 import { useState } from "react";
+import { Button } from "@/components/Button";
 import type { ShowResponse } from "@/components/api-types";
 import { Breadcrumbs } from "@/components/Breadcrumbs";
 import { Card } from "@/components/Card";
 import { ErrorState } from "@/components/ErrorState";
+import { FormMessage } from "@/components/FormMessage";
+import { plural } from "@/components/format";
 import { PageTitle } from "@/components/PageTitle";
 import { SkeletonCard } from "@/components/Skeleton";
 import { apiKeys, useApi } from "@/components/use-api";
 import { ShowNav } from "@/components/ShowNav";
 import type { MusicResponse } from "./music-types";
 import { OverridesPanel } from "./OverridesPanel";
+import { PhraseForm } from "./PhraseForm";
 import { PhraseTable } from "./PhraseTable";
 import { PlanPanel } from "./PlanPanel";
 
@@ -20,6 +24,8 @@ export function MusicView({ showId, initialPhraseId }: { showId: string; initial
   const show = useApi<ShowResponse>(apiKeys.show(showId));
   const music = useApi<MusicResponse>(musicKey(showId));
   const [picked, setPicked] = useState<string | null>(initialPhraseId);
+  const [form, setForm] = useState<"new" | "edit" | null>(null);
+  const [status, setStatus] = useState("");
   const crumbs = [
     { label: "Programs", href: "/programs" },
     { label: show.data?.show.name ?? "Show", href: `/shows/${showId}` },
@@ -37,11 +43,14 @@ export function MusicView({ showId, initialPhraseId }: { showId: string; initial
   if (!show.data || !music.data) return <SkeletonCard rows={8} label="Loading the music…" />;
   const m = music.data;
   const phrase = m.phrases.find((p) => p.id === picked) ?? m.phrases[0] ?? null;
+  const setOrder = new Map(m.sets.map((s) => [s.id, s.order]));
+  const lastEnd = Math.max(-1, ...m.phrases.map((p) => setOrder.get(p.lastSetId) ?? -1));
+  const nextFirst = [...m.sets].sort((a, b) => a.order - b.order).find((s) => s.order > lastEnd)?.id;
   return (
     <>
       <Breadcrumbs items={crumbs} />
       <ShowNav showId={showId} />
-      <PageTitle sub={`${m.phrases.length} phrases over ${m.sets.length} sets${m.canEdit ? "" : " · read only"}`}>Music</PageTitle>
+      <PageTitle sub={`${plural(m.phrases.length, "phrase")} over ${plural(m.sets.length, "set")}${m.canEdit ? "" : " · read only"}`}>Music</PageTitle>
       <Card title="Phrases" titleId="phrases-title">
         <ul className="flex flex-wrap gap-2" aria-label="Phrases">
           {m.phrases.map((p) => (
@@ -54,13 +63,35 @@ export function MusicView({ showId, initialPhraseId }: { showId: string; initial
               >
                 <span className="block">{p.name}</span>
                 <span className="block text-sm text-ink-soft">
-                  Sets {p.firstSetNumber}
-                  {p.lastSetNumber !== p.firstSetNumber ? `–${p.lastSetNumber}` : ""}
+                  {p.lastSetNumber !== p.firstSetNumber ? `Sets ${p.firstSetNumber}–${p.lastSetNumber}` : `Set ${p.firstSetNumber}`}
                 </span>
               </button>
             </li>
           ))}
         </ul>
+        {m.canEdit ? (
+          <div className="mt-3 flex flex-wrap gap-2">
+            <Button variant="secondary" onClick={() => setForm("new")}>New phrase</Button>
+            {phrase ? <Button variant="quiet" onClick={() => setForm("edit")}>Rename, re-span or delete {phrase.name}</Button> : null}
+          </div>
+        ) : null}
+        {form ? (
+          <PhraseForm
+            key={form === "edit" ? phrase?.id : "new"}
+            showId={showId}
+            sets={m.sets}
+            phrase={form === "edit" ? phrase : null}
+            suggestedFirstSetId={nextFirst}
+            onCancel={() => setForm(null)}
+            onDone={async (id, message) => {
+              await music.mutate();
+              if (id) setPicked(id);
+              setForm(null);
+              setStatus(message);
+            }}
+          />
+        ) : null}
+        <FormMessage id="phrases-status" tone="info">{status}</FormMessage>
       </Card>
       {phrase ? (
         <div className="mt-6 space-y-6">
@@ -69,7 +100,13 @@ export function MusicView({ showId, initialPhraseId }: { showId: string; initial
           <OverridesPanel showId={showId} music={m} phrase={phrase} />
         </div>
       ) : (
-        <p className="mt-6 text-ink-soft">No phrases yet.</p>
+        <p className="mt-6 text-ink-soft">
+          {m.canEdit
+            ? m.sections.length
+              ? "No phrases yet. Make the first one with \u201cNew phrase\u201d: name it and choose the sets it spans; then give each section its voice and written dynamic."
+              : "No phrases yet. Add the band on the show\u2019s overview first; then make phrases here and give each section its voice and written dynamic."
+            : "No phrases yet. The director or the drill designer writes the music here."}
+        </p>
       )}
     </>
   );

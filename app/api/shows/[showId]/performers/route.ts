@@ -1,8 +1,6 @@
 import { NextResponse } from "next/server";
-import { currentCatalog } from "@/db/queries/catalog";
+import { programInstruments } from "@/db/queries/catalog";
 import { addPerformers, rosterLabels } from "@/db/queries/performers";
-import { DEFAULT_INSTRUMENTS } from "@/lib/acoustics/catalog";
-import type { InstrumentCatalog } from "@/lib/acoustics/types";
 import { requireShow } from "@/lib/auth/access";
 import { labelPrefix, nextLabels } from "@/lib/editor/naming";
 import { badRequest, conflict, unprocessable } from "@/lib/http/errors";
@@ -15,7 +13,7 @@ import { addPerformersSchema } from "@/lib/validation/performers";
 export const POST = route<{ showId: string }>(async (req, { showId }) => {
   const { show } = await requireShow(showId, "edit-drill");
   const body = await readJson(req, addPerformersSchema);
-  const catalog = { ...DEFAULT_INSTRUMENTS, ...((await currentCatalog(show.programId))?.instruments as InstrumentCatalog | undefined) };
+  const catalog = await programInstruments(show.programId);
   const spec = catalog[body.instrument];
   if (!spec) throw badRequest(`"${body.instrument}" is not an instrument of this program's catalog.`, { instrument: ["unknown instrument"] });
   const roster = await rosterLabels(showId);
@@ -25,7 +23,7 @@ export const POST = route<{ showId: string }>(async (req, { showId }) => {
   const section = body.section ?? roster.find((r) => r.instrument === body.instrument)?.section ?? spec.name;
   const result = await addPerformers(
     showId,
-    labels.map((label) => ({ label, instrument: body.instrument, section, part: body.part, strengthDb: body.strengthDb })),
+    labels.map((label) => ({ label, instrument: body.instrument, section, part: body.part, strengthDb: body.strengthDb, name: body.name ?? null })),
   );
   if (!result.ok) throw conflict(`The label ${labels.join(", ")} is already on this show's roster.`);
   return NextResponse.json({ performers: result.performers }, { status: 201 });
