@@ -140,6 +140,10 @@ export const shows = pgTable(
     planLimits: jsonb("plan_limits"),
     /** Moved by database triggers on every write to a show-wide input of the analyses (migration 0005). */
     inputsRevision: bigint("inputs_revision", { mode: "number" }).notNull().default(0),
+    /** Set aside by a director: still readable, listed apart from the season's shows. */
+    archivedAt: timestamp("archived_at", { withTimezone: true, mode: "date" }),
+    /** Deleted by a director: hidden everywhere, restorable until it is purged (lib/show-lifecycle.ts). */
+    deletedAt: timestamp("deleted_at", { withTimezone: true, mode: "date" }),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
@@ -172,6 +176,8 @@ export const listeningPoints = pgTable(
     groundFactor: doublePrecision("ground_factor"),
     /** How far (m) that ground reaches from the point toward the field. */
     surroundingsM: doublePrecision("surroundings_m").notNull().default(0),
+    /** What the point hears besides the band (lib/acoustics/background.ts Background); null: nothing. */
+    background: jsonb("background"),
   },
   (t) => [
     index("listening_points_show_idx").on(t.showId),

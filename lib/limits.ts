@@ -11,6 +11,9 @@ export const SHOW_LIMITS = {
   listeningPoints: 10,
 } as const;
 
+/** Days a deleted show can be restored before it is removed for good. */
+export const SHOW_UNDO_DAYS = 14;
+
 /** One roster or drill CSV upload: its size and rows (413 past them). */
 export const MAX_UPLOAD_BYTES = 1_000_000;
 export const MAX_ROSTER_ROWS = 1_000;

@@ -41,11 +41,26 @@ export async function loadShowFile(showId: string): Promise<ShowFile | null> {
     show: {
       name: show.name,
       fieldRules: show.fieldRules,
-      conditions: { temperatureC: show.temperatureC, relativeHumidityPct: show.relativeHumidityPct, pressureKPa: show.pressureKPa, groundFactor: show.groundFactor },
+      conditions: {
+        temperatureC: show.temperatureC,
+        relativeHumidityPct: show.relativeHumidityPct,
+        pressureKPa: show.pressureKPa,
+        groundFactor: show.groundFactor,
+        betweenGroundFactor: show.betweenGroundFactor,
+      },
       checkTargets: show.checkTargets ?? null,
       planLimits: limitsOrNull(show.planLimits),
     },
-    listeningPoints: points.map((l) => ({ name: l.name, x: l.x, y: l.y, z: l.z, order: l.order })),
+    listeningPoints: points.map((l) => ({
+      name: l.name,
+      x: l.x,
+      y: l.y,
+      z: l.z,
+      order: l.order,
+      groundFactor: l.groundFactor,
+      surroundingsM: l.surroundingsM,
+      background: (l.background ?? null) as ShowFile["listeningPoints"][number]["background"],
+    })),
     performers: roster
       .map((p) => ({ label: p.label, instrument: p.instrument, section: p.section, part: p.part, strengthDb: p.strengthDb, name: p.name }))
       .sort(byText((p) => p.label)),
@@ -78,11 +93,11 @@ export async function loadShowFile(showId: string): Promise<ShowFile | null> {
 
 const CHUNK = 2000;
 
-/** Writes the file as a new show of the program, keeping the uploaded file beside it; returns the show's id. */
+/** Writes the file as a new show of the program, keeping the uploaded file beside it (none for a duplicate); returns the show's id. */
 export async function importShowFile(
   programId: string,
   file: ShowFile,
-  upload: { fileName: string; content: Buffer; uploadedBy: string },
+  upload: { fileName: string; content: Buffer; uploadedBy: string } | null,
   name = file.show.name,
 ): Promise<string> {
   return db.transaction(async (tx) => {
@@ -97,6 +112,7 @@ export async function importShowFile(
         relativeHumidityPct: c.relativeHumidityPct,
         pressureKPa: c.pressureKPa,
         groundFactor: c.groundFactor,
+        betweenGroundFactor: c.betweenGroundFactor ?? null,
         checkTargets: file.show.checkTargets ?? null,
         planLimits: file.show.planLimits ?? null,
       })
@@ -137,7 +153,7 @@ export async function importShowFile(
         await tx.insert(performerOverrides).values(p.overrides.map(({ label, ...o }) => ({ phraseId, performerId: performerId.get(label)!, ...o })));
       }
     }
-    await tx.insert(uploads).values({ programId, showId, kind: "show-json", fileName: upload.fileName, sizeBytes: upload.content.byteLength, content: upload.content, uploadedBy: upload.uploadedBy, confirmedAt: new Date() });
+    if (upload) await tx.insert(uploads).values({ programId, showId, kind: "show-json", fileName: upload.fileName, sizeBytes: upload.content.byteLength, content: upload.content, uploadedBy: upload.uploadedBy, confirmedAt: new Date() });
     return showId;
   });
 }

@@ -1,30 +1,31 @@
-import { asc, eq } from "drizzle-orm";
+import { and, asc, eq, isNull } from "drizzle-orm";
+import type { Background } from "@/lib/acoustics/background";
 import { db } from "../client";
 import { listeningPoints, performers, sets, shows } from "../schema";
+import { listeningPointColumns } from "./listening-points";
 
 export async function findShow(showId: string) {
   const rows = await db.select().from(shows).where(eq(shows.id, showId)).limit(1);
   return rows[0] ?? null;
 }
 
+/** The program's shows that are not deleted (archived ones too, marked). */
 export async function listShows(programId: string) {
-  return db.select({ id: shows.id, name: shows.name }).from(shows).where(eq(shows.programId, programId)).orderBy(asc(shows.name));
+  return db
+    .select({ id: shows.id, name: shows.name, archivedAt: shows.archivedAt })
+    .from(shows)
+    .where(and(eq(shows.programId, programId), isNull(shows.deletedAt)))
+    .orderBy(asc(shows.name));
 }
 
+/** The show's listening points in order; a stored background was validated when written (backgroundSchema). */
 export async function listListeningPoints(showId: string) {
-  return db
-    .select({
-      id: listeningPoints.id,
-      name: listeningPoints.name,
-      x: listeningPoints.x,
-      y: listeningPoints.y,
-      z: listeningPoints.z,
-      groundFactor: listeningPoints.groundFactor,
-      surroundingsM: listeningPoints.surroundingsM,
-    })
+  const rows = await db
+    .select(listeningPointColumns)
     .from(listeningPoints)
     .where(eq(listeningPoints.showId, showId))
     .orderBy(asc(listeningPoints.order), asc(listeningPoints.name));
+  return rows.map((r) => ({ ...r, background: (r.background ?? null) as Background | null }));
 }
 
 export async function listPerformers(showId: string) {
@@ -45,7 +46,7 @@ export async function listPerformers(showId: string) {
 
 export async function listSets(showId: string) {
   return db
-    .select({ id: sets.id, number: sets.number, counts: sets.counts, order: sets.order, version: sets.version, inputsRevision: sets.inputsRevision })
+    .select({ id: sets.id, number: sets.number, counts: sets.counts, order: sets.order, version: sets.version, inputsRevision: sets.inputsRevision, movementId: sets.movementId })
     .from(sets)
     .where(eq(sets.showId, showId))
     .orderBy(asc(sets.order));

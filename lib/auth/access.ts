@@ -7,6 +7,8 @@ import { can, type Action, type Role } from "./permissions";
 import { getCurrentSession } from "./session";
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+/** True for an id the database could hold (anything else names nothing). */
+export const isUuid = (id: string) => UUID.test(id);
 
 export async function requireUser() {
   const { user } = await getCurrentSession();
@@ -24,17 +26,21 @@ export async function requireProgram(programId: string, action: Action) {
   return { user, role, programId };
 }
 
-/** A show of another program is as unknown as a show that does not exist. */
-function showRole<T extends { role: Role | null }>(row: T | null, action: Action): T & { role: Role } {
+/** Which shows a check accepts: live ones (the default), deleted ones (restoring), or either. */
+type Deleted = boolean | "either";
+
+/** A show of another program, or a deleted one, is as unknown as a show that does not exist. */
+function showRole<T extends { role: Role | null; show: { deletedAt: Date | null } }>(row: T | null, action: Action, deleted: Deleted = false): T & { role: Role } {
   if (!row?.role) throw notFound("No such show.");
   if (!can(row.role, action)) throw forbidden();
+  if (deleted !== "either" && (row.show.deletedAt !== null) !== deleted) throw notFound("No such show.");
   return row as T & { role: Role };
 }
 
-export async function requireShow(showId: string, action: Action) {
+export async function requireShow(showId: string, action: Action, { deleted = false }: { deleted?: Deleted } = {}) {
   const user = await requireUser();
   if (!UUID.test(showId)) throw notFound("No such show.");
-  const { show, role } = showRole(await findShowAccess(user.id, showId), action);
+  const { show, role } = showRole(await findShowAccess(user.id, showId), action, deleted);
   return { user, role, show };
 }
 

@@ -8,11 +8,12 @@ export type Action =
   | "edit-drill" // roster, sets, positions, imports
   | "edit-music" // phrases, voices, written dynamics
   | "adopt-plan" // adopt a balance plan or a calibration
-  | "manage-show" // create, import, delete shows; conditions and listening points
+  | "manage-show" // create and import shows; settings, conditions and listening points
+  | "retire-show" // duplicate, archive, delete and restore shows
   | "manage-members"; // invitations, roles, removals
 
 const GRANTS: Record<Role, readonly Action[]> = {
-  director: ["read", "comment", "edit-drill", "edit-music", "adopt-plan", "manage-show", "manage-members"],
+  director: ["read", "comment", "edit-drill", "edit-music", "adopt-plan", "manage-show", "retire-show", "manage-members"],
   designer: ["read", "comment", "edit-drill", "edit-music", "manage-show"],
   staff: ["read", "comment"],
 };

@@ -51,7 +51,16 @@ export function buildAnalysisInput(args: {
   });
   return {
     performers,
-    listeningPoints: args.listeningPoints.map(({ id, x, y, z, groundFactor, surroundingsM }) => ({ id, x, y, z, groundFactor, surroundingsM })),
+    // A point's background only when it has one: inputs (and their stored hashes) of points without stay as they were.
+    listeningPoints: args.listeningPoints.map(({ id, x, y, z, groundFactor, surroundingsM, background }) => ({
+      id,
+      x,
+      y,
+      z,
+      groundFactor,
+      surroundingsM,
+      ...(background ? { background } : {}),
+    })),
     conditions: args.conditions,
     ...(args.instruments ? { instruments: args.instruments } : {}),
   };

@@ -23,7 +23,7 @@ describe("export", () => {
     expect(doc.phrases.length).toBeGreaterThan(0);
     expect(doc.phrases[0].voices.length).toBeGreaterThan(0);
     expect(doc.listeningPoints.map((l: any) => l.name)).toContain("Press box");
-    expect(doc.show.conditions).toEqual({ temperatureC: 24, relativeHumidityPct: 55, pressureKPa: 101.325, groundFactor: 1 });
+    expect(doc.show.conditions).toEqual({ temperatureC: 24, relativeHumidityPct: 55, pressureKPa: 101.325, groundFactor: 1, betweenGroundFactor: null });
   });
 
   it("export → import → export is the same document apart from ids", async () => {

@@ -11,7 +11,7 @@ describe("creating a show", () => {
     expect(res.status).toBe(201);
     const show = (await c.get(`/api/shows/${res.body.show.id}`)).body;
     expect(show.show).toMatchObject({ name: "Autumn Winds", fieldRules: "college" });
-    expect(show.listeningPoints).toEqual([{ id: expect.any(String), name: "Press box", x: 0, y: -25, z: 18, groundFactor: null, surroundingsM: 0 }]);
+    expect(show.listeningPoints).toEqual([{ id: expect.any(String), name: "Press box", x: 0, y: -25, z: 18, groundFactor: null, surroundingsM: 0, background: null }]);
     expect(show.sets).toMatchObject([{ id: res.body.show.firstSetId, number: "1", counts: 0 }]);
     expect(show.performers).toEqual([]);
     expect((await c.get(`/api/programs/${up.body.programId}/shows`)).body.shows.map((s: any) => s.name)).toEqual(["Autumn Winds"]);
