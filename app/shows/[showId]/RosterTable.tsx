@@ -1,6 +1,7 @@
 "use client";
 // The show's roster, sortable by label, name, instrument, section, part or strength, with a count per section;
 // editors add performers, and change or remove one from its row.
+import Link from "next/link";
 import { useState } from "react";
 import { useSWRConfig } from "swr";
 import type { Performer } from "@/components/api-types";
@@ -22,8 +23,17 @@ function strengthWord(db: number): string {
 
 const none = <span className="text-ink-faint">—</span>;
 
-const COLUMNS: Column<Performer>[] = [
-  { key: "label", header: "Label", sortValue: (p) => p.label, render: (p) => <span className="font-semibold">{p.label}</span> },
+const columnsFor = (showId: string): Column<Performer>[] => [
+  {
+    key: "label",
+    header: "Label",
+    sortValue: (p) => p.label,
+    render: (p) => (
+      <Link className="font-semibold text-turf-dark underline" href={`/shows/${showId}/performer/${encodeURIComponent(p.label)}`} title={`${p.label}'s dots in every set`}>
+        {p.label}
+      </Link>
+    ),
+  },
   { key: "name", header: "Name", sortValue: (p) => p.name ?? "", render: (p) => p.name || none },
   { key: "instrument", header: "Instrument", sortValue: (p) => instrumentName(p.instrument), render: (p) => instrumentName(p.instrument) },
   { key: "section", header: "Section", sortValue: (p) => p.section },
@@ -51,7 +61,7 @@ export function RosterTable({ showId, performers, editable }: { showId: string; 
   const chosen = performers.find((p) => p.id === editing) ?? null;
   const columns: Column<Performer>[] = editable
     ? [
-        ...COLUMNS,
+        ...columnsFor(showId),
         {
           key: "edit",
           header: "Change",
@@ -63,7 +73,7 @@ export function RosterTable({ showId, performers, editable }: { showId: string; 
           ),
         },
       ]
-    : COLUMNS;
+    : columnsFor(showId);
 
   return (
     <div className="space-y-4">

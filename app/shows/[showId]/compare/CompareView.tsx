@@ -10,7 +10,7 @@ import { SkeletonCard } from "@/components/Skeleton";
 import { apiKeys, useApi } from "@/components/use-api";
 import { ShowNav } from "@/components/ShowNav";
 import { CHECK_LABELS, VOICE_LABELS, formatDb } from "../music/voices";
-import { MiniField } from "./MiniField";
+import { MiniField } from "@/components/MiniField";
 
 type Side = { set: { id: string; number: string }; mix: { totalDbA: number | null }; checks: { id: string; passed: boolean }[] };
 type CompareResponse = {

@@ -58,6 +58,9 @@ export function SheetsView({ showId, by }: { showId: string; by: "performers" | 
                 {p.label}
                 {p.name ? ` — ${p.name}` : ""}
               </h2>
+              <Link className="no-print text-sm text-turf-dark underline" href={`/shows/${showId}/performer/${encodeURIComponent(p.label)}`}>
+                {p.label}&rsquo;s own page, with a picture per set (for a phone)
+              </Link>
               <p className="text-ink-soft">
                 {p.section}
                 {p.part ? `, ${p.part}` : ""} · {p.instrument}

@@ -385,7 +385,8 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
       <div className="grid gap-3 lg:grid-cols-[minmax(0,1fr)_20rem]">
         {/* On wide screens the field stays in view while the side panel scrolls (choosing a check marks players on it). */}
         <div className="flex min-w-0 flex-col gap-2 lg:sticky lg:top-2 lg:self-start">
-          <div ref={fieldBox} className="h-[min(62vh,560px)] min-h-[320px]">
+          {/* On a phone the field runs edge to edge: every pixel of width is scale. */}
+          <div ref={fieldBox} className="-mx-4 h-[360px] sm:mx-0 sm:h-[min(62vh,560px)] sm:min-h-[320px]">
             <FieldCanvas
               rules={show.data.show.fieldRules}
               dots={dots}
