@@ -11,13 +11,16 @@ const config = {
   // Kept out of the sandbox copy: build output, databases and test clusters (their sockets cannot be copied).
   ignorePatterns: ["/.tmp", "/.next", "/.data", "/tests/api", "/tests/db", "/tests/browser", "/public"],
   coverageAnalysis: "perTest",
-  // The machine is shared: two test processes at most.
-  concurrency: 2,
+  // The machine is shared (2 cores, several sessions): one test process.
+  concurrency: 1,
   reporters: ["clear-text", "progress", "json"],
   jsonReporter: { fileName: ".tmp/mutation/report.json" },
   tempDirName: ".tmp/stryker",
   cleanTempDir: "always",
-  incremental: false,
+  // Incremental: a rerun tests only the mutants whose code or covering tests changed since the
+  // last run (the file lives under .tmp, per worktree).
+  incremental: true,
+  incrementalFile: ".tmp/mutation/incremental.json",
   timeoutMS: 20000,
   // The first full run of the unit tests takes minutes on a busy machine.
   dryRunTimeoutMinutes: 30,

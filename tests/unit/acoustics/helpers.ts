@@ -46,3 +46,14 @@ export function handSource(bandLwDb: readonly number[], stepDb = 6): InstrumentS
     source: "test",
   };
 }
+
+/**
+ * A value computed on first use, inside a test. Work done while vitest collects a file (in a
+ * describe body) runs outside every test, so mutation testing (stryker.config.mjs) must count the
+ * code it reaches as "static" and rerun every test for each of its mutants; computing lazily keeps
+ * the engine's mutants tied to the tests that use them.
+ */
+export function lazy<T>(make: () => T): () => T {
+  let value: { v: T } | null = null;
+  return () => (value ??= { v: make() }).v;
+}
