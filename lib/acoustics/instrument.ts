@@ -72,4 +72,12 @@ export function validateInstrumentSpec(spec: InstrumentSpec, field: string): voi
   requireBands(spec.spectrumDb, `${field}.spectrumDb`);
   requireBands(spec.brightnessDbPerStep, `${field}.brightnessDbPerStep`);
   requireFinite(spec.carryDb, `${field}.carryDb`);
+  if (spec.uncertaintyDb !== undefined && !(requireFinite(spec.uncertaintyDb, `${field}.uncertaintyDb`) >= 0)) {
+    throw new AcousticsInputError(`${field}.uncertaintyDb`, "must be 0 or more");
+  }
+  if (spec.fit !== undefined) {
+    if (spec.fit === null || typeof spec.fit !== "object") throw new AcousticsInputError(`${field}.fit`, "must be an object");
+    if (!(requireFinite(spec.fit.stdErrorDb, `${field}.fit.stdErrorDb`) >= 0)) throw new AcousticsInputError(`${field}.fit.stdErrorDb`, "must be 0 or more");
+    if (!Number.isInteger(spec.fit.readings) || spec.fit.readings < 1) throw new AcousticsInputError(`${field}.fit.readings`, "must be a whole number of at least 1");
+  }
 }

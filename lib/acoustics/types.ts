@@ -35,6 +35,10 @@ export interface InstrumentSpec {
   carryDb: number;
   /** Where the numbers come from ("from memory" where not checked). */
   source: string;
+  /** Uncertainty (dB, about one standard deviation) when a source gives one; from memory otherwise (provenance.ts). */
+  uncertaintyDb?: number;
+  /** Set when the carry was adopted from a fit to box readings: how many, and the fit's standard error (dB). */
+  fit?: { readings: number; stdErrorDb: number };
 }
 
 export type InstrumentCatalog = Record<string, InstrumentSpec>;
