@@ -2,6 +2,9 @@
 // the total and the arrival spread. Says whether the figures are the browser's live preview or the
 // server's stored analysis, and that they are predictions. With the stored analysis it also shows
 // loudness (ISO 532-1 sones) and whether each voice is heard over the rest and the background.
+// Levels are shown to whole dB unless their uncertainty is under 1 dB (most catalog values are
+// from memory, lib/acoustics/provenance.ts), with the total's ± from the stored analysis.
+import type { LevelUncertainty } from "@/lib/acoustics/confidence";
 import type { PointLoudness } from "@/lib/acoustics/point-loudness";
 import { VOICES, type Voice } from "@/lib/acoustics/types";
 import { VOICE_STYLES } from "./palette";
@@ -14,9 +17,12 @@ export interface MixFigures {
   arrivalSpreadMs: number;
   /** From the stored analysis only; a live preview has none. */
   loudness?: PointLoudness;
+  /** From the stored analysis only (model version 4): how sure the levels are. */
+  uncertainty?: LevelUncertainty;
 }
 
-const fmt = (db: number | undefined) => (db === undefined || !Number.isFinite(db) ? "—" : db.toFixed(1));
+/** A level to the precision it deserves: tenths only when known to better than 1 dB. */
+const fmtAt = (precision: 0.1 | 1) => (db: number | undefined) => (db === undefined || !Number.isFinite(db) ? "—" : db.toFixed(precision === 0.1 ? 1 : 0));
 /** Bars span the 30 dB below the total (common practice for level meters, no source). */
 const RANGE_DB = 30;
 
@@ -30,6 +36,7 @@ function Bar({ value, top, colour }: { value: number | undefined; top: number; c
 }
 
 export function MixPanel({ mix, source, pointName, computedAt }: { mix: MixFigures | null; source: "preview" | "stored" | "loading"; pointName: string; computedAt?: string }) {
+  const fmt = fmtAt(mix?.uncertainty?.precisionDb ?? 1);
   const sections = mix ? Object.entries(mix.sections).filter(([, s]) => Number.isFinite(s.dbA)).sort((a, b) => b[1].dbA - a[1].dbA) : [];
   return (
     <section aria-labelledby="mix-title" className="rounded-xl border border-ink/10 bg-paper-raised p-4 shadow-sm" data-testid="mix-panel" data-source={source}>
@@ -43,9 +50,17 @@ export function MixPanel({ mix, source, pointName, computedAt }: { mix: MixFigur
       </div>
       {mix ? (
         <>
-          <p className="mt-2 text-3xl font-bold tabular-nums" data-testid="mix-total">
+          <p className="mt-2 text-3xl font-bold tabular-nums" data-testid="mix-total" data-db={mix.totalDbA}>
             {fmt(mix.totalDbA)} <span className="text-base font-semibold text-ink-soft">dBA total</span>
+            {mix.uncertainty ? (
+              <span className="ml-2 text-base font-semibold text-ink-soft" data-testid="mix-uncertainty">
+                ±{Math.max(1, Math.round(mix.uncertainty.totalDb))} dB
+              </span>
+            ) : null}
           </p>
+          {mix.uncertainty ? (
+            <p className="text-xs text-ink-soft">± is about one standard deviation from the instrument catalog&apos;s uncertainty (most values from memory; readings at the box narrow it).</p>
+          ) : null}
           {mix.loudness ? (
             <p className="text-sm text-ink-soft" data-testid="mix-loudness">
               Perceived <span className="font-semibold tabular-nums text-ink">{mix.loudness.totalSone.toFixed(1)} sone</span> (

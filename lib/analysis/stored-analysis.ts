@@ -8,6 +8,7 @@ import { findStoredAnalysis, findStoredResult, markAnalysisCurrent, storeAnalysi
 import { loadSetContext } from "@/db/queries/set-context";
 import type { Show } from "@/db/schema";
 import { analyzeSet, checkBalance, solveBalancePlan, toJsonSafe } from "@/lib/acoustics";
+import { checkConfidence, levelUncertainty } from "@/lib/acoustics/confidence";
 import type { MusicalLimits } from "@/lib/acoustics/plan-limits";
 import { BALANCE_VERSION } from "@/lib/acoustics/targets";
 import type { AnalysisInput, InstrumentCatalog } from "@/lib/acoustics/types";
@@ -39,7 +40,16 @@ export function computeBalance(
   const point = played.listeningPoints.find((l) => l.id === listeningPointId)!;
   const pr = analyzeSet({ ...played, listeningPoints: [point] }).points[0]!;
   const plan = solveBalancePlan([{ ...written, listeningPoints: [point] }], listeningPointId, targets, undefined, limits);
-  return toJsonSafe({ mix: mixOf(pr), loudness: pr.loudness, checks: checkBalance(played, pr, targets), plan: plan.entries, planUnmet: plan.unmet });
+  const checks = checkBalance(played, pr, targets);
+  // Each check with whether it holds across the catalog's uncertainty (clear or borderline).
+  const confidence = checkConfidence(played, listeningPointId, targets, { point: pr, checks });
+  return toJsonSafe({
+    mix: { ...mixOf(pr), uncertainty: levelUncertainty(played, pr) },
+    loudness: pr.loudness,
+    checks: checks.map((c, n) => ({ ...c, confidence: confidence[n]!.confidence, sameInCases: confidence[n]!.sameInCases, cases: confidence[n]!.cases, turnedBy: confidence[n]!.turnedBy })),
+    plan: plan.entries,
+    planUnmet: plan.unmet,
+  });
 }
 
 export type StoredBalance = ReturnType<typeof computeBalance>;

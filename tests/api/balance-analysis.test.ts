@@ -18,9 +18,18 @@ describe("GET analysis: checks and plan", () => {
     const res = await staff.get(analysisPath("7"));
     expect(res.status).toBe(200);
     expect(res.body.checks.map((c: any) => c.id)).toEqual(["melody-forward", "bass-up-pyramid", "depth-support", "wide-form-edges", "stand-outs", "arrival-spread"]);
+    // The demo catalog is from memory (5 dB an instrument): the total is that uncertain at most,
+    // less as independent instruments average out, so it is shown to whole dB.
+    expect(res.body.mix.uncertainty.totalDb).toBeGreaterThan(0);
+    expect(res.body.mix.uncertainty.totalDb).toBeLessThanOrEqual(5 + 1e-9);
+    expect(res.body.mix.uncertainty.precisionDb).toBe(1);
     const performerIds = new Set(ids.show.performers.map((p: any) => p.id));
     for (const c of res.body.checks) {
-      expect(Object.keys(c).sort()).toEqual(["detail", "id", "passed", "performerIds"]);
+      // shared/API.md's four fields, and whether the verdict holds across the catalog's uncertainty.
+      expect(Object.keys(c).sort()).toEqual(["cases", "confidence", "detail", "id", "passed", "performerIds", "sameInCases", "turnedBy"]);
+      expect(c.confidence).toBe(c.sameInCases === c.cases ? "clear" : "borderline");
+      expect(c.turnedBy).toHaveLength(c.cases - c.sameInCases);
+      if (c.id === "arrival-spread") expect(c.confidence).toBe("clear"); // arrival times do not depend on levels
       expect(c.detail.length).toBeGreaterThan(10);
       for (const id of c.performerIds) expect(performerIds.has(id)).toBe(true);
       if (c.passed) expect(c.performerIds).toEqual([]);

@@ -23,6 +23,23 @@ function Verdict({ passed }: { passed: boolean }) {
   );
 }
 
+/** Whether the verdict holds across the catalog's uncertainty (model version 4; absent on older answers). */
+function Certainty({ check }: { check: AnalysisResponse["checks"][number] }) {
+  if (!check.confidence) return null;
+  const clear = check.confidence === "clear";
+  const turned = (check.turnedBy ?? []).map((t) => `${t.name} ${Math.abs(t.shiftDb).toFixed(0)} dB ${t.shiftDb > 0 ? "louder" : "softer"}`);
+  return (
+    <span className="block text-xs" data-testid={`certainty-${check.id}`} data-confidence={check.confidence}>
+      <span className={`font-semibold ${clear ? "text-ink" : "text-signal-warn"}`}>{clear ? "Clear" : "Borderline"}</span>
+      <span className="text-ink-soft">
+        {clear
+          ? ` — ${check.passed ? "passes" : "fails"} in all ${check.cases} likely cases of the catalog's uncertainty.`
+          : ` — ${check.passed ? "would fail" : "would pass"} with ${turned.slice(0, 3).join(" or ")}${turned.length > 3 ? ` (and ${turned.length - 3} more)` : ""}.`}
+      </span>
+    </span>
+  );
+}
+
 export function ChecksPanel({
   showId,
   analysis,
@@ -62,6 +79,7 @@ export function ChecksPanel({
                       <Verdict passed />
                     </div>
                     <p className="text-xs text-ink-soft">{c.detail}</p>
+                    <Certainty check={c} />
                   </div>
                 ) : (
                   <button
@@ -75,6 +93,7 @@ export function ChecksPanel({
                       <Verdict passed={false} />
                     </span>
                     <span className="block text-xs">{c.detail}</span>
+                    <Certainty check={c} />
                     <span className="mt-0.5 block text-xs font-semibold text-turf-dark">
                       {c.performerIds.length === 0 ? "No single players to mark." : on ? `${c.performerIds.length} marked on the field · choose again to clear` : `Mark the ${c.performerIds.length} players on the field`}
                     </span>

@@ -2,6 +2,7 @@
 // What the field editor reads (SWR, one key per resource) and the answers' shapes.
 import type { ShowResponse } from "@/components/api-types";
 import { apiKeys, useApi } from "@/components/use-api";
+import type { CheckConfidence } from "@/lib/acoustics/confidence";
 import type { AnalysisInput, CheckResult, Dynamic, PlanEntry } from "@/lib/acoustics/types";
 import type { PositionRow } from "@/lib/editor/layout";
 import type { MixFigures } from "@/components/field/MixPanel";
@@ -16,7 +17,8 @@ export type AnalysisResponse = {
   mix: MixFigures & { performers: { performerId: string; dbA: number | null; arrivalMs: number }[] };
   /** Added with model version 3; absent from older stored answers. */
   loudness?: MixFigures["loudness"];
-  checks: CheckResult[];
+  /** confidence…turnedBy added with model version 4 (lib/acoustics/confidence.ts). */
+  checks: (CheckResult & Partial<Omit<CheckConfidence, "id">>)[];
   plan: (PlanEntry & { atLimit?: Extract<Dynamic, "pp" | "fff">; unreachable?: string[] })[];
 };
 
