@@ -1,4 +1,4 @@
-import { and, asc, eq, isNull } from "drizzle-orm";
+import { and, asc, count, eq, inArray, isNull } from "drizzle-orm";
 import type { Background } from "@/lib/acoustics/background";
 import { db } from "../client";
 import { listeningPoints, performers, sets, shows } from "../schema";
@@ -15,6 +15,18 @@ export async function listShows(programId: string) {
     .select({ id: shows.id, name: shows.name, archivedAt: shows.archivedAt })
     .from(shows)
     .where(and(eq(shows.programId, programId), isNull(shows.deletedAt)))
+    .orderBy(asc(shows.name));
+}
+
+/** The program's shows (not deleted) with a performer playing one of `instruments`, and how many such performers each has. */
+export async function listShowsPlaying(programId: string, instruments: string[]) {
+  if (instruments.length === 0) return [];
+  return db
+    .select({ id: shows.id, name: shows.name, performers: count(performers.id) })
+    .from(shows)
+    .innerJoin(performers, eq(performers.showId, shows.id))
+    .where(and(eq(shows.programId, programId), isNull(shows.deletedAt), inArray(performers.instrument, instruments)))
+    .groupBy(shows.id, shows.name)
     .orderBy(asc(shows.name));
 }
 

@@ -63,9 +63,19 @@ export function roundedOffsets(fit: CarryFit): Record<string, number> {
   return Object.fromEntries(Object.entries(fit.offsetsDb).map(([k, v]) => [k, round2(v)]));
 }
 
-/** The catalog a fit would adopt. */
+/** Instruments whose carry the fit changes by at least 0.05 dB (what adopting it changes). */
+export function changedInstruments(pf: ProgramFit): string[] {
+  return pf.fit ? Object.entries(roundedOffsets(pf.fit)).filter(([, d]) => Math.abs(d) >= 0.05).map(([k]) => k).sort() : [];
+}
+
+/** The catalog a fit would adopt: each fitted instrument says from how many readings, with the fit's standard error. */
 export function adoptedCatalog(pf: ProgramFit): InstrumentCatalog {
-  return pf.fit ? applyCarryOffsets(pf.catalog, roundedOffsets(pf.fit)) : pf.catalog;
+  if (!pf.fit) return pf.catalog;
+  const out = applyCarryOffsets(pf.catalog, roundedOffsets(pf.fit));
+  for (const [key, d] of Object.entries(pf.fit.determination)) {
+    out[key] = { ...out[key]!, fit: { readings: d.readings, stdErrorDb: round2(d.stdErrorDb) } };
+  }
+  return out;
 }
 
 /** The API's view of a fit: each reading predicted before and after against measured, per instrument the change. */

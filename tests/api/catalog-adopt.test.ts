@@ -120,6 +120,48 @@ describe("catalog fit, adopt and restore", () => {
     expect(back.body.mix.sections.Trumpets.dbA).toBeCloseTo(trumpetsBefore, 9);
   });
 
+  it("names the shows an adoption changes, marks the fitted instruments, and undoes it in one call", async () => {
+    const start = (await staff.get(catalog())).body;
+    const base = start.currentVersion as number;
+    const fit = (await staff.get(`${catalog()}/fit?showId=${ids.showId}`)).body;
+    // The demo show has trumpets and tubas, the instruments the readings move.
+    expect(fit.affectedShows.map((s: any) => s.id)).toContain(ids.showId);
+    const demo = fit.affectedShows.find((s: any) => s.id === ids.showId);
+    const playing = ids.show.performers.filter((p: any) => Math.abs(fit.offsetsDb[p.instrument] ?? 0) >= 0.05).length;
+    expect(demo.performers).toBe(playing);
+    // Another program's show is never named.
+    expect(fit.affectedShows.every((s: any) => s.id !== ids.otherShowId)).toBe(true);
+
+    const adopt = await ids.director.post(`${catalog()}/adopt`, { baseVersion: base, showId: ids.showId });
+    expect(adopt.status).toBe(201);
+    expect(adopt.body.affectedShows).toEqual(fit.affectedShows);
+    // Each fitted instrument now says so, with the fit's standard error as its uncertainty.
+    const adopted = (await staff.get(catalog())).body.versions[0];
+    const trumpetFit = fit.instruments.find((i: any) => i.key === "trumpet");
+    expect(adopted.provenance.trumpet).toEqual({ kind: "fitted", text: `fitted from ${trumpetFit.readings} box readings`, uncertaintyDb: trumpetFit.stdErrorDb });
+    expect(start.versions[0]?.provenance?.trumpet.kind ?? "memory").not.toBe("fitted");
+    expect(adopted.provenance.flute.kind).toBe(start.versions[0]?.provenance?.flute.kind ?? "memory");
+
+    expect((await staff.post(`${catalog()}/undo`, { version: adopt.body.version })).status).toBe(403);
+    expect((await ids.director.post(`${catalog()}/undo`, { version: adopt.body.version + 5 })).status).toBe(404);
+    expect((await ids.director.post(`${catalog()}/undo`, { version: base })).status).toBe(base === 0 ? 400 : 409);
+    const undo = await ids.director.post(`${catalog()}/undo`, { version: adopt.body.version });
+    expect(undo.status).toBe(201);
+    expect(undo.body).toMatchObject({ version: base + 2, undid: base + 1 });
+    const after = (await staff.get(catalog())).body;
+    expect(after.versions[0].note).toMatch(new RegExp(`Undid version ${base + 1}`));
+    // The carries and provenance in force are those before the adoption again.
+    const back = (await staff.get(catalog())).body;
+    if (start.versions[0]) {
+      expect(back.versions[0].carryDb).toEqual(start.versions[0].carryDb);
+      expect(back.versions[0].provenance).toEqual(start.versions[0].provenance);
+    } else {
+      expect(back.versions[0].provenance.trumpet.kind).toBe("memory");
+    }
+    // Undoing again is stale: the undone version is no longer in force.
+    expect((await ids.director.post(`${catalog()}/undo`, { version: adopt.body.version })).status).toBe(409);
+  });
+
   it("lists versions to every member and to no one else", async () => {
     const res = await staff.get(catalog());
     expect(res.status).toBe(200);

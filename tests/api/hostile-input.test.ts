@@ -87,6 +87,7 @@ const jsonRoutes = () => [
   ["POST", `/api/programs/${programId}/shows`],
   ["POST", `/api/programs/${programId}/catalog/adopt`],
   ["POST", `/api/programs/${programId}/catalog/restore`],
+  ["POST", `/api/programs/${programId}/catalog/undo`],
   ["POST", "/api/auth/sign-up"],
   ["POST", "/api/auth/password-reset"],
 ];

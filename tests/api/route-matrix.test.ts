@@ -59,6 +59,7 @@ const RULES: Record<string, Rule> = {
   "GET programs/[programId]/catalog/fit": { roles: ALL },
   "POST programs/[programId]/catalog/adopt": { roles: DIRECTORS, body: "json" },
   "POST programs/[programId]/catalog/restore": { roles: DIRECTORS, body: "json" },
+  "POST programs/[programId]/catalog/undo": { roles: DIRECTORS, body: "json" },
 
   "GET shows/[showId]": { roles: ALL },
   "PATCH shows/[showId]": { roles: EDITORS, body: "json" },

@@ -48,6 +48,29 @@ export function CatalogHistory({ programId, catalog, canRestore, onChanged }: { 
           </li>
         ))}
       </ol>
+      {versions[0]?.provenance ? (
+        <details data-testid="catalog-provenance">
+          <summary className="cursor-pointer font-semibold">Where each instrument&apos;s values come from (version in force)</summary>
+          <table className="mt-2 w-full border-collapse text-left text-sm">
+            <thead>
+              <tr>
+                <th scope="col" className="py-1 pr-3">Instrument</th>
+                <th scope="col" className="py-1 pr-3">Provenance</th>
+                <th scope="col" className="py-1 text-right">± dB</th>
+              </tr>
+            </thead>
+            <tbody>
+              {Object.entries(versions[0].provenance).map(([key, p]) => (
+                <tr key={key} className="border-t border-ink/10">
+                  <td className="py-1 pr-3">{key}</td>
+                  <td className="py-1 pr-3">{p.kind === "memory" ? `From memory (${p.text})` : p.text}</td>
+                  <td className="py-1 text-right tabular-nums">{p.uncertaintyDb < 1 ? p.uncertaintyDb.toFixed(1) : p.uncertaintyDb.toFixed(0)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </details>
+      ) : null}
       <FormMessage id="history-status" tone={message?.tone ?? "info"}>{message?.text ?? ""}</FormMessage>
     </div>
   );

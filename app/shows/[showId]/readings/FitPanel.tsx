@@ -7,6 +7,7 @@ import { ApiError, sendJson } from "@/components/fetcher";
 import { FormMessage } from "@/components/FormMessage";
 import { signedDb } from "@/components/format";
 import type { ApiState } from "@/components/use-api";
+import { FitChart } from "./FitChart";
 import type { FitInstrument, FitResponse, Reading } from "./readings-types";
 
 const db1 = (x: number) => (Math.round(x * 10) / 10).toFixed(1);
@@ -34,6 +35,8 @@ type Props = {
 export function FitPanel({ showId, programId, readings, fit, canAdopt, onChanged }: Props) {
   const [message, setMessage] = useState<{ tone: "info" | "bad"; text: string } | null>(null);
   const [busy, setBusy] = useState(false);
+  /** The version just adopted, while it is the one to undo. */
+  const [adopted, setAdopted] = useState<number | null>(null);
   const byId = new Map((fit.data?.readings ?? []).map((r) => [r.id, r]));
   const skipped = new Map((fit.data?.skipped ?? []).map((s) => [s.id, s.reason]));
 
@@ -42,11 +45,28 @@ export function FitPanel({ showId, programId, readings, fit, canAdopt, onChanged
     setBusy(true);
     setMessage(null);
     try {
-      const res = await sendJson<{ version: number }>(`/api/programs/${programId}/catalog/adopt`, "POST", { baseVersion: fit.data.baseVersion, showId });
-      setMessage({ tone: "info", text: `Adopted as catalog version ${res!.version}. Box mixes recompute with it.` });
+      const res = await sendJson<{ version: number; affectedShows: { name: string }[] }>(`/api/programs/${programId}/catalog/adopt`, "POST", { baseVersion: fit.data.baseVersion, showId });
+      const shows = res!.affectedShows.map((s) => s.name);
+      setMessage({ tone: "info", text: `Adopted as catalog version ${res!.version}. ${shows.length ? `Box mixes change in ${shows.join(", ")}.` : "No show plays the changed instruments."}` });
+      setAdopted(res!.version);
       await onChanged();
     } catch (err) {
       setMessage({ tone: "bad", text: err instanceof ApiError ? err.message : "The fit could not be adopted." });
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  async function undo() {
+    if (adopted === null) return;
+    setBusy(true);
+    try {
+      const res = await sendJson<{ version: number }>(`/api/programs/${programId}/catalog/undo`, "POST", { version: adopted });
+      setMessage({ tone: "info", text: `Undone: the catalog before version ${adopted} is back in force as version ${res!.version}.` });
+      setAdopted(null);
+      await onChanged();
+    } catch (err) {
+      setMessage({ tone: "bad", text: err instanceof ApiError ? err.message : "The adoption could not be undone." });
     } finally {
       setBusy(false);
     }
@@ -80,6 +100,7 @@ export function FitPanel({ showId, programId, readings, fit, canAdopt, onChanged
             ? ` Readings scatter ±${db1(f.residualStdDb)} dB about the fit (${f.degreesOfFreedom} degree${f.degreesOfFreedom === 1 ? "" : "s"} of freedom).`
             : ""}
       </p>
+      {f ? <FitChart readings={f.readings} /> : null}
       <div className="overflow-x-auto rounded-lg border border-ink/10">
         <table className="w-full min-w-[52rem] border-collapse text-left">
           <caption className="sr-only">Each reading: measured level, predicted now and after the fit</caption>
@@ -166,8 +187,16 @@ export function FitPanel({ showId, programId, readings, fit, canAdopt, onChanged
           <Button onClick={adopt} disabled={busy}>
             {busy ? "Adopting…" : "Adopt the fit into the catalog"}
           </Button>
-          <span className="text-ink-soft">Makes a new catalog version; every earlier version stays and can be restored.</span>
+          <span className="text-ink-soft" data-testid="fit-affects">
+            Makes a new catalog version; every earlier version stays and can be restored.{" "}
+            {f.affectedShows?.length ? `Changes the box mixes of ${f.affectedShows.map((s) => s.name).join(", ")}.` : "No show plays the changed instruments."}
+          </span>
         </div>
+      ) : null}
+      {canAdopt && adopted !== null ? (
+        <Button variant="secondary" onClick={undo} disabled={busy}>
+          Undo adopting version {adopted}
+        </Button>
       ) : null}
       <FormMessage id="fit-status" tone={message?.tone ?? "info"}>
         {message?.text ?? ""}

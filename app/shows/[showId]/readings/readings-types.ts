@@ -37,9 +37,12 @@ export type FitResponse = {
   /** Readings minus fitted offsets; 0 or fewer: the fit matches any readings and checks nothing. */
   degreesOfFreedom?: number | null;
   residualStdDb?: number | null;
+  /** The program's shows whose box mixes adopting the fit would change. */
+  affectedShows?: { id: string; name: string; performers: number }[];
 };
 
-export type CatalogVersion = { version: number; note: string; createdBy: string | null; createdAt: string; carryDb: Record<string, number> };
+export type Provenance = { kind: "source" | "memory" | "fitted"; text: string; uncertaintyDb: number };
+export type CatalogVersion = { version: number; note: string; createdBy: string | null; createdAt: string; carryDb: Record<string, number>; provenance?: Record<string, Provenance> };
 export type CatalogResponse = { role: Role; currentVersion: number; versions: CatalogVersion[] };
 
 export const readingKeys = {

@@ -1,11 +1,12 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { addCatalogVersion } from "@/db/queries/catalog-versions";
+import { listShowsPlaying } from "@/db/queries/shows";
 import { requireProgram } from "@/lib/auth/access";
 import { badRequest, conflict } from "@/lib/http/errors";
 import { readJson } from "@/lib/http/body";
 import { route } from "@/lib/http/handler";
-import { adoptedCatalog, programFit, roundedOffsets } from "@/lib/readings/program-fit";
+import { adoptedCatalog, changedInstruments, programFit, roundedOffsets } from "@/lib/readings/program-fit";
 import { fitScopeSchema } from "../fit-query";
 
 const bodySchema = fitScopeSchema.extend({ baseVersion: z.number().int().min(0) });
@@ -13,6 +14,7 @@ const bodySchema = fitScopeSchema.extend({ baseVersion: z.number().int().min(0) 
 /**
  * Adopts the fit (recomputed here, never taken from the client) as the catalog's next version;
  * 409 when the catalog changed since `baseVersion`. Stored box mixes recompute on their next read.
+ * The answer names the shows whose mixes change; POST …/catalog/undo with the new version undoes it.
  */
 export const POST = route<{ programId: string }>(async (req, { programId }) => {
   const { user } = await requireProgram(programId, "adopt-plan");
@@ -33,5 +35,6 @@ export const POST = route<{ programId: string }>(async (req, { programId }) => {
     userId: user.id,
   });
   if (!result.ok) throw conflict("The catalog changed since you looked at the fit.", { currentVersion: result.currentVersion });
-  return NextResponse.json({ version: result.version, offsetsDb }, { status: 201 });
+  const affectedShows = await listShowsPlaying(programId, changedInstruments(pf));
+  return NextResponse.json({ version: result.version, offsetsDb, affectedShows }, { status: 201 });
 });
