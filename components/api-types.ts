@@ -20,4 +20,5 @@ export type ShowResponse = {
   listeningPoints: ListeningPoint[];
   performers: Performer[];
   sets: SetSummary[];
+  progress?: { placedPerformers: number; phrases: number };
 };

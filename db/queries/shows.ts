@@ -1,7 +1,7 @@
-import { and, asc, count, eq, inArray, isNull } from "drizzle-orm";
+import { and, asc, count, eq, inArray, isNull, sql } from "drizzle-orm";
 import type { Background } from "@/lib/acoustics/background";
 import { db } from "../client";
-import { listeningPoints, performers, sets, shows } from "../schema";
+import { listeningPoints, performers, phrases, positions, sets, shows } from "../schema";
 import { listeningPointColumns } from "./listening-points";
 
 export async function findShow(showId: string) {
@@ -80,4 +80,16 @@ export async function createShow(programId: string, input: { name: string; field
     const [first] = await tx.insert(sets).values({ showId: show!.id, number: "1", counts: 0, order: 0 }).returning({ id: sets.id });
     return { ...show!, firstSetId: first!.id };
   });
+}
+
+/** How far a new show has come: performers placed in any set, and phrases written. */
+export async function showProgress(showId: string) {
+  const [row] = await db
+    .select({
+      placedPerformers: sql<number>`(select count(distinct ${positions.performerId})::int from ${positions} join ${sets} on ${sets.id} = ${positions.setId} where ${sets.showId} = ${showId})`,
+      phrases: sql<number>`(select count(*)::int from ${phrases} where ${phrases.showId} = ${showId})`,
+    })
+    .from(shows)
+    .where(eq(shows.id, showId));
+  return row ?? { placedPerformers: 0, phrases: 0 };
 }

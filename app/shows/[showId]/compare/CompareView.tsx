@@ -5,6 +5,7 @@ import type { ShowResponse } from "@/components/api-types";
 import { Breadcrumbs } from "@/components/Breadcrumbs";
 import { Card } from "@/components/Card";
 import { ErrorState } from "@/components/ErrorState";
+import { NextStepNotice } from "@/components/NextStepNotice";
 import { PageTitle } from "@/components/PageTitle";
 import { SkeletonCard } from "@/components/Skeleton";
 import { apiKeys, useApi } from "@/components/use-api";
@@ -51,6 +52,7 @@ export function CompareView({ showId, initialA, initialB }: { showId: string; in
       <Breadcrumbs items={crumbs} />
       <ShowNav showId={showId} />
       <PageTitle sub="Two sets' predicted box mixes side by side. Predictions are estimates, not measurements.">Set compare</PageTitle>
+      <NextStepNotice showId={showId} need="drill" />
       <div className="mb-6 flex flex-wrap items-end gap-4">
         <label className="flex flex-col text-sm">From set<select className={sel} value={aId ?? ""} onChange={(e) => { setA(e.target.value); setB(null); }}>{sets.map((s) => <option key={s.id} value={s.id}>{s.number}</option>)}</select></label>
         <label className="flex flex-col text-sm">To set<select className={sel} value={bId ?? ""} onChange={(e) => setB(e.target.value)}>{sets.map((s) => <option key={s.id} value={s.id}>{s.number}</option>)}</select></label>

@@ -7,6 +7,7 @@ import { Breadcrumbs } from "@/components/Breadcrumbs";
 import { Button } from "@/components/Button";
 import { Card } from "@/components/Card";
 import { ErrorState } from "@/components/ErrorState";
+import { NextStepNotice } from "@/components/NextStepNotice";
 import { PageTitle } from "@/components/PageTitle";
 import { SkeletonCard } from "@/components/Skeleton";
 import { SortableTable, type Column } from "@/components/SortableTable";
@@ -68,6 +69,7 @@ export function HearingView({ showId }: { showId: string }) {
       <Breadcrumbs items={crumbs} />
       <ShowNav showId={showId} />
       <PageTitle sub="The estimated level at each performer's ears (1.6 m) from every other player in the set, and the noise dose of a rehearsal at that level.">Hearing map</PageTitle>
+      <NextStepNotice showId={showId} need="drill" />
       <div className="space-y-6">
         <HearingCautions criteria={map.data?.criteria ?? { niosh: { levelDbA: 85, hours: 8, exchangeDb: 3, source: "NIOSH 98-126 (1998)" }, osha: { levelDbA: 90, hours: 8, exchangeDb: 5, source: "OSHA 29 CFR 1910.95" } }} anyOver={over.length > 0} />
         <Card title={map.data ? `Set ${map.data.set.number}` : "Set"} titleId="map-title">

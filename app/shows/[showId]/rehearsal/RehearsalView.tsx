@@ -8,6 +8,7 @@ import { Card } from "@/components/Card";
 import { ErrorState } from "@/components/ErrorState";
 import { ApiError, sendJson } from "@/components/fetcher";
 import { FormMessage } from "@/components/FormMessage";
+import { NextStepNotice } from "@/components/NextStepNotice";
 import { PageTitle } from "@/components/PageTitle";
 import { ROLE_WORDS } from "@/components/RoleBadge";
 import { useApi } from "@/components/use-api";
@@ -79,6 +80,7 @@ export function RehearsalView({ showId, initial }: { showId: string; initial: { 
         <Breadcrumbs items={[{ label: "Programs", href: "/programs" }, { label: o?.show.name ?? "Show", href: `/shows/${showId}` }, { label: "Stadium rehearsal" }]} />
         <ShowNav showId={showId} />
         <PageTitle sub="Pick what to rehearse with the stadium time you have. The worst balance comes first.">Stadium rehearsal plan</PageTitle>
+        <NextStepNotice showId={showId} need="music" />
         {!o ? (
           <p role="status">Loading the show…</p>
         ) : (

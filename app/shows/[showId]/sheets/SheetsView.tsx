@@ -4,6 +4,7 @@ import Link from "next/link";
 import { Breadcrumbs } from "@/components/Breadcrumbs";
 import { Button, buttonClass } from "@/components/Button";
 import { ErrorState } from "@/components/ErrorState";
+import { NextStepNotice } from "@/components/NextStepNotice";
 import { PageTitle } from "@/components/PageTitle";
 import { useApi } from "@/components/use-api";
 import { ShowNav } from "@/components/ShowNav";
@@ -31,6 +32,7 @@ export function SheetsView({ showId, by }: { showId: string; by: "performers" | 
         <Breadcrumbs items={[{ label: "Programs", href: "/programs" }, { label: name, href: `/shows/${showId}` }, { label: "Coordinate sheets" }]} />
         <ShowNav showId={showId} />
         <PageTitle sub={`Steps are 8 to 5 (22.5 in). ${data ? RULES_WORDS[data.show.fieldRules] : ""}. Side 1 is on the left seen from the press box.`}>Coordinate sheets</PageTitle>
+        <NextStepNotice showId={showId} need="drill" />
         <div className="mb-6 flex flex-wrap items-center gap-3">
           {tab("performers", "A sheet per performer")}
           {tab("sets", "A sheet per set")}

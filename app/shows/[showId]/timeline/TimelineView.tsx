@@ -7,6 +7,7 @@ import type { ShowResponse } from "@/components/api-types";
 import { Breadcrumbs } from "@/components/Breadcrumbs";
 import { Card } from "@/components/Card";
 import { ErrorState } from "@/components/ErrorState";
+import { NextStepNotice } from "@/components/NextStepNotice";
 import { PageTitle } from "@/components/PageTitle";
 import { SkeletonCard } from "@/components/Skeleton";
 import { apiKeys, useApi } from "@/components/use-api";
@@ -63,6 +64,7 @@ export function TimelineView({ showId }: { showId: string }) {
       >
         Show timeline
       </PageTitle>
+      <NextStepNotice showId={showId} need="music" />
       <div className="space-y-6">
         <Card
           title="Voices at the listening point"
