@@ -42,6 +42,7 @@ export function groundBandsInto(
 ): void {
   const e1 = 1 - Math.exp(-dpM / 50);
   const e2 = 1 - Math.exp(-2.8e-6 * dpM * dpM);
+  // At dp = 30(hs + hr) both branches give 0, so "<" for "<=" is an equivalent mutant.
   const q = dpM <= 30 * heightSumM ? 0 : 1 - (30 * heightSumM) / dpM;
   const middle = -3 * q * (1 - gm);
   // Each outer region: −1.5 + G·(1.5 + term), the term being a'(h) … d'(h) less its 1.5.

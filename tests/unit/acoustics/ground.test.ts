@@ -9,6 +9,16 @@ describe("ground effect, ISO 9613-2:1996 7.3.1 general method, Table 3", () => {
     expect(at(250, 1, 0, 0, 1e5)).toBeCloseTo(17.2, 6);
   });
 
+  it("takes c'(h) and d'(h) from each outer region on its own: with one region hard, 500 Hz is −1.5 + (1.5 + 14 − 1.5) = 12.5 dB and 1 kHz −1.5 + (1.5 + 5 − 1.5) = 3.5 dB (Table 3 at h = 0, dp → ∞, hand calculation)", () => {
+    // h = 0: c'(0) = 1.5 + 14.0, d'(0) = 1.5 + 5.0; dp → ∞: e^(−dp/50) → 0; q = 1 and G_m = 1, so A_m = 0.
+    const one = (source: number, receiver: number, f: number) =>
+      groundAttenuationDb({ frequencyHz: f, sourceHeightM: 0, receiverHeightM: 0, distanceM: 1e5, groundFactor: { source, middle: 1, receiver } });
+    for (const [s, r] of [[0, 1], [1, 0]] as const) {
+      expect(one(s, r, 500), `G_s ${s}, G_r ${r}`).toBeCloseTo(12.5, 9);
+      expect(one(s, r, 1000), `G_s ${s}, G_r ${r}`).toBeCloseTo(3.5, 9);
+    }
+  });
+
   it("gives −3 dB in every band for hard ground (G = 0) with dp ≤ 30(hs + hr): −1.5 dB per region, A_m = 0", () => {
     for (const b of OCTAVE_BANDS) expect(at(b.exactHz, 0, 1.5, 1.5, 60)).toBeCloseTo(-3, 9);
   });
