@@ -42,7 +42,6 @@ export function groundBandsInto(
 ): void {
   const e1 = 1 - Math.exp(-dpM / 50);
   const e2 = 1 - Math.exp(-2.8e-6 * dpM * dpM);
-  // At dp = 30(hs + hr) both branches give 0, so "<" for "<=" is an equivalent mutant.
   const q = dpM <= 30 * heightSumM ? 0 : 1 - (30 * heightSumM) / dpM;
   const middle = -3 * q * (1 - gm);
   // Each outer region: −1.5 + G·(1.5 + term), the term being a'(h) … d'(h) less its 1.5.
@@ -80,6 +79,9 @@ export function groundAttenuationDb(query: GroundQuery): number {
   if (query.groundFactor === null) return 0;
   const given = query.groundFactor;
   const one = typeof given === "number";
+  // Mutation testing: given?.middle, given?.receiver and the "groundFactor" names of the middle and
+  // receiver lines are equivalent mutants — an undefined or out-of-range G always fails on the
+  // source line first.
   const gs = requireInRange(one ? given : given?.source, 0, 1, one ? "groundFactor" : "groundFactor.source");
   const gm = requireInRange(one ? given : given?.middle, 0, 1, one ? "groundFactor" : "groundFactor.middle");
   const gr = requireInRange(one ? given : given?.receiver, 0, 1, one ? "groundFactor" : "groundFactor.receiver");

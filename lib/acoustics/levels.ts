@@ -24,6 +24,8 @@ export function sumLevelsDb(levels: readonly number[]): number {
 
 /** ISO 9613-2:1996 eq. (7) geometric divergence: 20·lg(d / 1 m) + 11 dB. */
 export function divergenceDb(distanceM: number): number {
+  // The typeof test is kept for readers; Number.isFinite refuses non-numbers too, so mutating it
+  // is equivalent (mutation testing).
   if (typeof distanceM !== "number" || !Number.isFinite(distanceM) || distanceM <= 0) {
     throw new AcousticsInputError("distanceM", "must be a positive finite number");
   }

@@ -28,6 +28,7 @@ describe("air (atmosphere.ts: −50…60 °C, 0…100 % RH, 0 < p ≤ 200 kPa)",
     expect(() => validateAir({ ...AIR, pressureKPa: 200.01 })).toThrow(/^pressureKPa must be above 0 and at most 200$/);
     expect(() => validateAir({ ...AIR, pressureKPa: Number.NaN })).toThrow("pressureKPa must be a finite number");
     expect(() => validateAir(null as never)).toThrow("conditions must be an object");
+    expect(() => validateAir(5 as never)).toThrow("conditions must be an object");
     expect(() => validateAir(null as never, "weather.")).toThrow("weather. must be an object");
   });
 
@@ -77,6 +78,10 @@ describe("ground (ground.ts, ground-regions.ts)", () => {
     expect(() => groundAttenuationDb({ ...q, groundFactor: { source: 2, middle: 0, receiver: 0 } })).toThrow("groundFactor.source");
     expect(() => groundAttenuationDb({ ...q, groundFactor: { source: 0, middle: 0, receiver: 2 } })).toThrow("groundFactor.receiver");
     expect(groundAttenuationDb({ ...q, groundFactor: null })).toBe(0);
+    expect(() => groundAttenuationDb({ ...q, groundFactor: undefined as never })).toThrow("groundFactor.source must be a finite number");
+    expect(() => groundAttenuationDb({ ...q, frequencyHz: Number.NaN })).toThrow("frequencyHz must be a finite number");
+    expect(() => groundAttenuationDb({ ...q, sourceHeightM: Number.NaN })).toThrow("sourceHeightM must be a finite number");
+    expect(() => groundAttenuationDb({ ...q, receiverHeightM: Number.NaN })).toThrow("receiverHeightM must be a finite number");
     // Heights and distance of 0 are allowed (a source on the ground, a point above it).
     expect(Number.isFinite(groundAttenuationDb({ ...q, sourceHeightM: 0, receiverHeightM: 0, distanceM: 0 }))).toBe(true);
   });
