@@ -18,6 +18,7 @@ const PAGES: { path: string; label: string }[] = [
   { path: "/sheets", label: "Coordinate sheets" },
   { path: "/imports", label: "Imports" },
   { path: "/targets", label: "Balance targets" },
+  { path: "/settings", label: "Settings" },
 ];
 
 export function ShowNav({ showId }: { showId: string }) {

@@ -87,7 +87,7 @@ function parseSteps(s: string): number | string {
   return Number.isFinite(n) ? n : `"${s.trim()}" is not a number of steps`;
 }
 
-const SIDE_PREFIX = /^\s*(?:side|s)\s*([12])\s*[:,\-–]?\s*/;
+export const SIDE_PREFIX = /^\s*(?:side|s)\s*([12])\s*[:,\-–]?\s*/;
 const YARD_REF = String.raw`(?:the\s+)?(?:(goal(?:\s*line)?|g)|(\d+(?:\.\d+)?)\s*(?:yard\s*line|yd\.?\s*(?:ln|line)?|yl)?)`;
 const HORIZ_ON = new RegExp(String.raw`^on\s+${YARD_REF}$`);
 const HORIZ_OFF = new RegExp(String.raw`^${NUMBER}\s*(?:steps?|stp?s?)?\s+(inside|outside|in|out)(?:\s+of)?\s+${YARD_REF}$`);
@@ -110,7 +110,8 @@ function yardOf(goal: string | undefined, num: string | undefined): number | str
   return yard;
 }
 
-function parseSideToSide(part: string, side: Side | null): number | string {
+/** x of a yard-line position ("on the 50", "2 steps outside the 35"), or why it cannot be read. */
+export function parseSideToSide(part: string, side: Side | null): number | string {
   let yard: number | string;
   let steps = 0;
   const on = HORIZ_ON.exec(part);

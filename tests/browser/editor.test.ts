@@ -114,7 +114,8 @@ describe("field editor", () => {
     }
     expect(await page.getByText(/^Count \d+ of \d+$/).count()).toBe(1);
     expect(totals.size).toBeGreaterThan(1); // the mix changes as the performers move
-    await page.locator('[data-testid="play-transition"]').click(); // stop
+    await page.locator('[data-testid="play-transition"]').click(); // pause on the count shown
+    await page.getByRole("button", { name: /^Show set / }).click();
     await waitForStoredMix(page);
     expect(Number(await page.locator('[data-testid="mix-total"]').getAttribute("data-db"))).toBeCloseTo(storedTotal, 1);
     expect(problems).toEqual([]);
@@ -191,7 +192,7 @@ describe("field editor", () => {
     const { page, problems } = await open(DEMO.designer);
     const last = ids.setIds[ids.setIds.length - 1];
     await openSet(page, ids.showId, last);
-    await page.getByRole("button", { name: "Add set" }).click();
+    await page.getByRole("button", { name: "Add empty set" }).click();
     await page.waitForURL((url) => !url.pathname.endsWith(last), { timeout: 30_000 });
     await page.waitForSelector('[data-testid="field-stage"] canvas', { timeout: 60_000 });
     await expect.poll(async () => (await editorState(page)).version).toBe(1);

@@ -5,7 +5,9 @@ import { signUp } from "./sign-up";
 
 export async function copyDemoShow(tag: string) {
   const client = new Client();
-  const up = await signUp(client, { name: `${tag} Director`, email: uniqueEmail(tag), password: `${tag}-director-pass`, programName: `${tag} Band` });
+  const email = uniqueEmail(tag);
+  const password = `${tag}-director-pass`;
+  const up = await signUp(client, { name: `${tag} Director`, email, password, programName: `${tag} Band` });
   if (up.status !== 201) throw new Error(`sign-up answered ${up.status}`);
   const programId = up.body.programId as string;
   const demo = await signedIn(DEMO.director);
@@ -23,5 +25,5 @@ export async function copyDemoShow(tag: string) {
   for (const phrase of music.phrases) await client.call("DELETE", `/api/shows/${showId}/phrases/${phrase.id}/plan`);
   const show = (await client.get(`/api/shows/${showId}`)).body;
   const pressBoxId = show.listeningPoints.find((l: any) => l.name === "Press box").id as string;
-  return { client, programId, showId, show, pressBoxId };
+  return { client, programId, showId, show, pressBoxId, email, password };
 }

@@ -7,6 +7,8 @@ import { Card } from "@/components/Card";
 import { EmptyState } from "@/components/EmptyState";
 import { can } from "@/lib/auth/permissions";
 import { NewShowForm } from "./NewShowForm";
+import { RestoreBackup } from "./RestoreBackup";
+import { DeletedShows } from "./DeletedShows";
 import { ErrorState } from "@/components/ErrorState";
 import { PageTitle } from "@/components/PageTitle";
 import { RoleBadge, ROLE_WORDS } from "@/components/RoleBadge";
@@ -46,25 +48,27 @@ export function ProgramOverview({ programId }: { programId: string }) {
         </div>
       )}
       <div className="grid items-start gap-6 lg:grid-cols-[3fr_2fr]">
-        <ShowsCard shows={shows} programId={programId} canCreate={!!program.data && can(program.data.role, "manage-show")} />
+        <ShowsCard shows={shows} programId={programId} canCreate={!!program.data && can(program.data.role, "manage-show")} canRestore={!!program.data && can(program.data.role, "retire-show")} />
         <MembersCard program={program} />
       </div>
     </>
   );
 }
 
-function ShowsCard({ shows, programId, canCreate }: { shows: ApiState<ShowsResponse>; programId: string; canCreate: boolean }) {
+function ShowsCard({ shows, programId, canCreate, canRestore }: { shows: ApiState<ShowsResponse>; programId: string; canCreate: boolean; canRestore: boolean }) {
   if (shows.error) return <ErrorState error={shows.error} what="program" onRetry={() => shows.mutate()} />;
   if (!shows.data) return <SkeletonCard rows={2} label="Loading shows…" />;
+  const current = shows.data.shows.filter((s) => !s.archivedAt);
+  const archived = shows.data.shows.filter((s) => s.archivedAt);
   return (
     <Card title="Shows" titleId="shows-title">
-      {shows.data.shows.length === 0 ? (
+      {current.length === 0 ? (
         <EmptyState title="No shows yet">
-          {canCreate ? "Start one below." : "A show appears here once a director or designer creates it."}
+          {canCreate ? "Start one below, or restore a backup. Then add the roster, place the sets, write the music and set the listening points." : "A show appears here once a director or designer creates it."}
         </EmptyState>
       ) : (
         <ul className="space-y-3">
-          {shows.data.shows.map((s) => (
+          {current.map((s) => (
             <li key={s.id}>
               <Link
                 href={`/shows/${s.id}`}
@@ -79,7 +83,23 @@ function ShowsCard({ shows, programId, canCreate }: { shows: ApiState<ShowsRespo
           ))}
         </ul>
       )}
+      {archived.length ? (
+        <details className="mt-4">
+          <summary className="cursor-pointer font-semibold">Archived ({archived.length})</summary>
+          <ul className="mt-2 space-y-1">
+            {archived.map((s) => (
+              <li key={s.id}>
+                <Link href={`/shows/${s.id}`} className="font-semibold text-turf-dark underline underline-offset-4">
+                  {s.name}
+                </Link>
+              </li>
+            ))}
+          </ul>
+        </details>
+      ) : null}
+      {canRestore && shows.data.deletedShows?.length ? <DeletedShows shows={shows.data.deletedShows} onRestored={() => void shows.mutate()} /> : null}
       {canCreate ? <NewShowForm programId={programId} onCreated={() => void shows.mutate()} /> : null}
+      {canCreate ? <RestoreBackup programId={programId} onRestored={() => void shows.mutate()} /> : null}
     </Card>
   );
 }

@@ -17,6 +17,7 @@ import { MixPanel, type MixFigures } from "@/components/field/MixPanel";
 import { FAMILY_SHAPES, VOICE_STYLES } from "@/components/field/palette";
 import type { StageDot } from "@/components/field/FieldStage";
 import { DEFAULT_INSTRUMENTS, positionsAtCount } from "@/lib/acoustics";
+import { snapToStep } from "@/lib/field/geometry";
 import type { InstrumentCatalog, VoiceOrTacet } from "@/lib/acoustics/types";
 import { can } from "@/lib/auth/permissions";
 import { copyFrom, face, fillBlock, mirrorSides, moveBy, nudge, snapToGrid, spreadAlongArc, spreadAlongLine, type Changes } from "@/lib/editor/forms";
@@ -32,6 +33,8 @@ import { SelectionPanel } from "./SelectionPanel";
 import { SetsBar } from "./SetsBar";
 import { usePreview, type PreviewMix } from "./use-preview";
 import { useSetSaver } from "./use-set-saver";
+import { TransitionPlayer } from "./TransitionPlayer";
+import { usePlayback } from "./use-playback";
 import { createLiveMix, useLiveMix, type LiveMix } from "./live-mix";
 
 /** The mix panel, showing a drag's live mix while there is one. */
@@ -53,6 +56,8 @@ declare global {
       flagged(): string[];
       /** The count of the transition shown, or null when the field shows the set itself. */
       shownCount(): number | null;
+      /** Positions on the field now: the set's, or those of the count shown. */
+      shown(): Layout;
       frameTimes: number[];
     };
   }
@@ -77,11 +82,10 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
   const [selected, setSelected] = useState<string[]>([]);
   const [pointId, setPointId] = useState<string | null>(null);
   const [placingId, setPlacingId] = useState<string | null>(null);
-  const [snap, setSnap] = useState(false);
+  // On by default: positions land on the step grid, as the drill is written (issue: "1.75 steps inside the 35").
+  const [snap, setSnap] = useState(true);
   const [showGrid, setShowGrid] = useState(false);
   const [liveMix] = useState(createLiveMix);
-  const [playCount, setPlayCount] = useState<number | null>(initialCount);
-  const [playing, setPlaying] = useState(false);
   const [chosenCheck, setChosenCheck] = useState<string | null>(null);
   const frameTimes = useRef<number[]>([]);
   const fieldBox = useRef<HTMLDivElement>(null);
@@ -126,6 +130,8 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
 
   // Transition playback: positions of the count being shown (between the previous set and this one).
   const counts = sets[index]?.counts ?? 0;
+  const playback = usePlayback(counts, initialCount);
+  const { count: playCount, playing } = playback;
   const playLayout = useMemo(() => {
     if (playCount === null || !previous.data) return null;
     return layoutOf(positionsAtCount(previous.data.positions, rowsOf(layout), Math.min(playCount, counts), Math.max(1, counts)));
@@ -187,6 +193,7 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
       selected: () => selected,
       flagged: () => [...flagged],
       shownCount: () => shownCount,
+      shown: () => shown,
       frameTimes: frameTimes.current,
     };
   });
@@ -238,20 +245,6 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
     window.addEventListener("keydown", onKey);
     return () => window.removeEventListener("keydown", onKey);
   });
-
-  // Transition playback: one count every half second (120 beats a minute); paused on a count from the address.
-  useEffect(() => {
-    if (playCount === null || !playing) return;
-    if (playCount >= counts) {
-      const t = setTimeout(() => {
-        setPlayCount(null);
-        setPlaying(false);
-      }, 900);
-      return () => clearTimeout(t);
-    }
-    const t = setTimeout(() => setPlayCount((c) => (c === null ? null : c + 1)), 500);
-    return () => clearTimeout(t);
-  }, [playCount, counts, playing]);
 
   if (show.error) return <ErrorState error={show.error} what="show" onRetry={() => show.mutate()} />;
   if (setData.error) return <ErrorState error={setData.error} what="set" onRetry={() => setData.mutate()} />;
@@ -336,13 +329,9 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
         sets={sets}
         currentId={setId}
         editable={editable}
-        onAdd={async () => {
-          const r = await sendJson<{ set: { id: string } }>(editorKeys.sets(showId), "POST", { after: setId });
-          await afterSetChange();
-          router.push(`/shows/${showId}/sets/${r!.set.id}`);
-        }}
-        onDuplicate={async () => {
-          const r = await sendJson<{ set: { id: string } }>(editorKeys.sets(showId), "POST", { duplicateOf: setId });
+        onAdd={async (fromHere) => {
+          // A new set starts from this one's positions unless asked to start empty; 8 counts either way.
+          const r = await sendJson<{ set: { id: string } }>(editorKeys.sets(showId), "POST", fromHere ? { after: setId, duplicateOf: setId, counts: 8 } : { after: setId });
           await afterSetChange();
           router.push(`/shows/${showId}/sets/${r!.set.id}`);
         }}
@@ -414,7 +403,7 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
               }}
               onPlace={(x, y) => {
                 if (!placingId) return;
-                apply({ [placingId]: { x, y, facingDeg: 0 } });
+                apply({ [placingId]: snap ? { x: snapToStep(x), y: snapToStep(y), facingDeg: 0 } : { x, y, facingDeg: 0 } });
                 setSelected([placingId]);
                 // Keep placing: the next unplaced performer follows (Esc stops).
                 setPlacingId(unplaced.find((p) => p.id !== placingId)?.id ?? null);
@@ -426,33 +415,7 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
             />
           </div>
           <Legend flaggedBy={chosen ? (CHECK_LABELS[chosen.id] ?? chosen.id) : null} />
-          {previous.data ? (
-            <div className="flex flex-wrap items-center gap-2 text-sm">
-              <span className="text-ink-soft">Set {sets[index - 1]?.number} shown faintly, with each performer&apos;s path.</span>
-              <button
-                type="button"
-                className="min-h-9 rounded-md border border-ink/20 bg-paper-raised px-3 font-semibold hover:bg-paper-sunk"
-                onClick={() => {
-                  if (playing) setPlayCount(null);
-                  else setPlayCount(shownCount ?? 0);
-                  setPlaying(!playing);
-                }}
-                data-testid="play-transition"
-              >
-                {playing ? "Stop" : shownCount !== null ? `Play on from count ${shownCount}` : `Play the ${counts} counts from set ${sets[index - 1]?.number}`}
-              </button>
-              {shownCount !== null ? (
-                <span className="font-semibold tabular-nums" aria-live="polite" data-testid="shown-count">
-                  Count {shownCount} of {counts}
-                </span>
-              ) : null}
-              {shownCount !== null && !playing ? (
-                <button type="button" className="min-h-9 rounded-md border border-ink/20 bg-paper-raised px-3 font-semibold hover:bg-paper-sunk" onClick={() => setPlayCount(null)}>
-                  Show set {current?.number}
-                </button>
-              ) : null}
-            </div>
-          ) : null}
+          {previous.data ? <TransitionPlayer playback={playback} counts={counts} from={sets[index - 1]?.number ?? ""} to={current?.number ?? ""} /> : null}
         </div>
         <aside className="flex flex-col gap-3">
           <div className="rounded-xl border border-ink/10 bg-paper-raised px-4 py-3 shadow-sm">

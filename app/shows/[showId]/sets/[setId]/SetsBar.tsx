@@ -1,4 +1,4 @@
-// The show's sets in order with their counts: open one, add, duplicate, renumber, change counts, delete (with confirmation).
+// The show's sets in order with their counts: open one, add (from this set's positions, or empty), renumber, change counts, delete (with confirmation).
 import Link from "next/link";
 import { useState } from "react";
 import type { SetSummary } from "@/components/api-types";
@@ -8,8 +8,8 @@ export function SetsBar(props: {
   sets: SetSummary[];
   currentId: string;
   editable: boolean;
-  onAdd(): Promise<void>;
-  onDuplicate(): Promise<void>;
+  /** fromHere: the new set starts from this set's positions (else empty). */
+  onAdd(fromHere: boolean): Promise<void>;
   onRenumber(number: string): Promise<void>;
   onCounts(counts: number): Promise<void>;
   onDelete(): Promise<void>;
@@ -48,11 +48,11 @@ export function SetsBar(props: {
       </ol>
       {props.editable && current ? (
         <div className="flex shrink-0 flex-wrap items-center gap-1.5">
-          <button type="button" className={btn} onClick={act(props.onAdd)}>
+          <button type="button" className={btn} onClick={act(() => props.onAdd(true))} title={`A new set after ${current.number}, starting from its positions`}>
             Add set
           </button>
-          <button type="button" className={btn} onClick={act(props.onDuplicate)}>
-            Duplicate {current.number}
+          <button type="button" className={btn} onClick={act(() => props.onAdd(false))}>
+            Add empty set
           </button>
           {editing ? (
             <form
