@@ -6,7 +6,9 @@ import { usePathname } from "next/navigation";
 import type { ShowResponse } from "./api-types";
 import { apiKeys, useApi } from "./use-api";
 
-const PAGES: { path: string; label: string }[] = [
+// `short`: the label in the row of tabs on wider screens, so the twelve pages stay on one row at 1366 px
+// and the field editor's drawing fits a laptop's screen; the phone menu and page titles keep the full words.
+const PAGES: { path: string; label: string; short?: string }[] = [
   { path: "", label: "Overview" },
   { path: "/sets", label: "Field editor" },
   { path: "/music", label: "Music" },
@@ -14,10 +16,10 @@ const PAGES: { path: string; label: string }[] = [
   { path: "/compare", label: "Compare" },
   { path: "/readings", label: "Box readings" },
   { path: "/hearing", label: "Hearing map" },
-  { path: "/rehearsal", label: "Stadium rehearsal" },
-  { path: "/sheets", label: "Coordinate sheets" },
+  { path: "/rehearsal", label: "Stadium rehearsal", short: "Rehearsal" },
+  { path: "/sheets", label: "Coordinate sheets", short: "Sheets" },
   { path: "/imports", label: "Imports" },
-  { path: "/targets", label: "Balance targets" },
+  { path: "/targets", label: "Balance targets", short: "Targets" },
   { path: "/settings", label: "Settings" },
 ];
 
@@ -28,14 +30,16 @@ export function ShowNav({ showId }: { showId: string }) {
   const firstSet = show.data?.sets[0]?.id;
   const here = pathname.replace(/\/$/, "");
 
-  const items = PAGES.map(({ path, label }) => {
+  const items = PAGES.map(({ path, label, short }) => {
     const href = path === "/sets" ? (firstSet ? `${base}/sets/${encodeURIComponent(firstSet)}` : null) : `${base}${path}`;
     const current = path === "" ? here === base : here === `${base}${path}` || here.startsWith(`${base}${path}/`);
-    return { label, href, current };
+    return { label, short: short ?? label, href, current };
   });
   const currentLabel = items.find((i) => i.current)?.label;
-  const links = (cls: string) =>
-    items.map(({ label, href, current }) => (
+  const links = (cls: string, wide = false) =>
+    items.map(({ label: full, short, href, current }) => {
+      const label = wide ? short : full;
+      return (
       <li key={label}>
         {current ? (
           <Link href={here} aria-current="page" className={`${cls} border-turf-dark bg-turf-dark text-white`}>
@@ -52,7 +56,8 @@ export function ShowNav({ showId }: { showId: string }) {
           </span>
         )}
       </li>
-    ));
+      );
+    });
 
   return (
     <nav aria-label="Show pages" className="no-print mb-4">
@@ -63,7 +68,7 @@ export function ShowNav({ showId }: { showId: string }) {
         </summary>
         <ul className="mt-1 grid grid-cols-2 gap-1">{links("flex min-h-11 items-center rounded-lg border px-2 text-sm font-semibold")}</ul>
       </details>
-      <ul className="hidden flex-wrap gap-1 sm:flex">{links("inline-flex min-h-11 items-center rounded-lg border px-1.5 text-sm font-semibold")}</ul>
+      <ul className="hidden flex-wrap gap-1 sm:flex">{links("inline-flex min-h-11 items-center rounded-lg border px-1.5 text-sm font-semibold", true)}</ul>
     </nav>
   );
 }

@@ -2,8 +2,8 @@
 // "side 1: 2 steps outside the 35, 20 m in from the front sideline, 1.7 m up". Across the field in
 // metres from a sideline: "behind" a sideline is off the field (the stands), "in from" it is on the
 // field. Pure; the settings page uses it.
-import { FIELD_WIDTH_M, type FieldRules, type Side } from "./geometry";
-import { describePosition, parseSideToSide, SIDE_PREFIX } from "./words";
+import { FIELD_WIDTH_M, type FieldRules } from "./geometry";
+import { describePosition, parseSideToSide, sideAndRest } from "./words";
 
 /** Ear height of a standing listener when no height is given (common practice, no source). */
 export const DEFAULT_EAR_HEIGHT_M = 1.7;
@@ -31,13 +31,7 @@ function depthY(part: string): number | null {
 
 /** Reads a listening point's place written as describeListeningPoint writes it. */
 export function listeningPointFromWords(text: string): PointWordsResult {
-  let rest = text.trim().toLowerCase().replace(/\s+/g, " ");
-  let side: Side | null = null;
-  const prefix = SIDE_PREFIX.exec(rest);
-  if (prefix) {
-    side = Number(prefix[1]) as Side;
-    rest = rest.slice(prefix[0].length);
-  }
+  const { side, rest } = sideAndRest(text);
   const parts = rest.split(/[;,]/).map((p) => p.trim()).filter(Boolean);
   let x: number | null = null;
   let y: number | null = null;
@@ -53,8 +47,8 @@ export function listeningPointFromWords(text: string): PointWordsResult {
       y = d;
       continue;
     }
-    const sideMatch = SIDE_PREFIX.exec(part);
-    const across = parseSideToSide(sideMatch ? part.slice(sideMatch[0].length) : part, sideMatch ? (Number(sideMatch[1]) as Side) : side);
+    const own = sideAndRest(part);
+    const across = parseSideToSide(own.rest, own.side ?? side);
     if (typeof across === "string") return { ok: false, error: `${across}; write e.g. "on the 50, 25 m behind the front sideline, 18 m up".` };
     x = across;
   }

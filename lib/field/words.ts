@@ -87,7 +87,7 @@ function parseSteps(s: string): number | string {
   return Number.isFinite(n) ? n : `"${s.trim()}" is not a number of steps`;
 }
 
-export const SIDE_PREFIX = /^\s*(?:side|s)\s*([12])\s*[:,\-–]?\s*/;
+const SIDE_PREFIX = /^\s*(?:side|s)\s*([12])\s*[:,\-–]?\s*/;
 const YARD_REF = String.raw`(?:the\s+)?(?:(goal(?:\s*line)?|g)|(\d+(?:\.\d+)?)\s*(?:yard\s*line|yd\.?\s*(?:ln|line)?|yl)?)`;
 const HORIZ_ON = new RegExp(String.raw`^on\s+${YARD_REF}$`);
 const HORIZ_OFF = new RegExp(String.raw`^${NUMBER}\s*(?:steps?|stp?s?)?\s+(inside|outside|in|out)(?:\s+of)?\s+${YARD_REF}$`);
@@ -141,15 +141,18 @@ function parseFrontToBack(part: string, rules: FieldRules): number | string {
   return frontBackY(off[3], off[4], rules) + sign * n * STEP_M;
 }
 
+/** Text in lower case with single spaces, and the side it opens with ("side 1:", "S2") taken off. */
+export function sideAndRest(text: string): { side: Side | null; rest: string } {
+  const rest = text.trim().toLowerCase().replace(/\s+/g, " ");
+  const prefix = SIDE_PREFIX.exec(rest);
+  return prefix ? { side: Number(prefix[1]) as Side, rest: rest.slice(prefix[0].length) } : { side: null, rest };
+}
+
 /** Reads a position written as describePosition writes it (and common shorthands: S1, FH, BSL, yd ln). */
 export function positionFromWords(text: string, rules: FieldRules): WordsResult {
-  let rest = text.trim().toLowerCase().replace(/\s+/g, " ");
-  let side: Side | null = null;
-  const prefix = SIDE_PREFIX.exec(rest);
-  if (prefix) {
-    side = Number(prefix[1]) as Side;
-    rest = rest.slice(prefix[0].length);
-  }
+  const opening = sideAndRest(text);
+  let side = opening.side;
+  const rest = opening.rest;
   const parts = rest.split(rest.includes(";") ? ";" : ",").map((p) => p.trim()).filter(Boolean);
   if (parts.length !== 2) return { ok: false, error: "Write a yard-line part and a front-to-back part, separated by a semicolon." };
   // Either order: the part that names a hash or sideline is the front-to-back one.
