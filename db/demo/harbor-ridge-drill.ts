@@ -51,6 +51,8 @@ function winds(points: Point[], facingDeg = 0): Form[] {
 const windCount = WW.length + BR.length;
 const companyFront = (y: number) => row(0, y, windCount, 2); // 2-step interval: side-1 17 to side-2 17
 const brassBlock = block({ x: -4, y: 17 }, 8, 4, 2).slice(0, BR.length); // trumpets in the front row
+// Eight files of four ranks 10 steps apart, filled file by file, so each section has players in front and back.
+const deepBrass = block({ x: 6, y: 10 }, 8, 4, 10, "files").slice(0, BR.length);
 const withoutSoloist = BR.filter((l) => l !== SOLOIST);
 const brassBlockNoSolo = brassBlock.filter((_, i) => BR[i] !== SOLOIST);
 const ballad = (clarinetY: number): Form[] => [
@@ -64,22 +66,22 @@ export const HARBOR_RIDGE_SETS: DemoSet[] = [
   drillSet("1", 0, 1, [
     { labels: WW, points: block({ x: -20, y: 12 }, 6, 4, 3, "files").slice(0, WW.length) },
     { labels: BR, points: block({ x: 8, y: 12 }, 8, 4, 3, "files").slice(0, BR.length) },
-    { labels: BAT, points: row(0, 26, BAT.length, 2) },
+    { labels: BAT, points: row(0, 16, BAT.length, 2) },
   ]),
   drillSet("2", 16, 1, [
     { labels: WW, points: arc({ x: -14, y: 24 }, 10, 200, 340, WW.length) },
     { labels: BR, points: arc({ x: 14, y: 24 }, 12, 200, 340, BR.length) },
-    { labels: BAT, points: block({ x: -2.86, y: 27 }, 6, 2, 2) },
+    { labels: BAT, points: block({ x: -2.86, y: 18 }, 6, 2, 2) },
   ]),
-  drillSet("3", 24, 1, [...winds(arc({ x: 0, y: 6 }, 22, 160, 20, windCount)), { labels: BAT, points: row(0, 32, BAT.length, 2) }]),
-  drillSet("4", 8, 1, [...winds(arc({ x: 0, y: 8 }, 21, 162, 18, windCount)), { labels: BAT, points: row(0, 33, BAT.length, 2) }]),
+  drillSet("3", 24, 1, [...winds(arc({ x: 0, y: 6 }, 22, 160, 20, windCount)), { labels: BAT, points: row(0, 18, BAT.length, 2) }]),
+  drillSet("4", 8, 1, [...winds(arc({ x: 0, y: 8 }, 21, 162, 18, windCount)), { labels: BAT, points: row(0, 19, BAT.length, 2) }]),
   drillSet("5", 24, 1, [
     { labels: WW, points: block({ x: -16, y: 14 }, 6, 4, 2, "files").slice(0, WW.length) },
     { labels: BR, points: block({ x: 2, y: 15 }, 8, 4, 2, "files").slice(0, BR.length) },
     { labels: BAT, points: block({ x: -2.86, y: 26 }, 6, 2, 2) },
   ]),
   // The wide form: a company front of all winds, 2 steps apart, about 66 yards wide.
-  drillSet("6", 32, 1, [...winds(companyFront(12)), { labels: BAT, points: row(0, 18, BAT.length, 2) }]),
+  drillSet("6", 32, 1, [...winds(companyFront(12)), { labels: BAT, points: row(0, 16, BAT.length, 2) }]),
 
   // Movement 2, "Still Water": the clarinets' song in front of a brass arc.
   drillSet("7", 32, 2, [
@@ -118,10 +120,12 @@ export const HARBOR_RIDGE_SETS: DemoSet[] = [
     { labels: BR, points: line({ x: 4, y: 22 }, { x: 34, y: 32 }, BR.length), facingDeg: 180 },
     { labels: BAT, points: block({ x: -2.86, y: 12 }, 6, 2, 2) },
   ]),
+  // The brass in a deep block, its back two ranks turned upstage for the visual: the back of the field goes thin.
   drillSet("13", 16, 3, [
     { labels: WW, points: line({ x: -27, y: 22 }, { x: -4, y: 30 }, WW.length), facingDeg: 30 },
-    { labels: BR, points: line({ x: 4, y: 30 }, { x: 34, y: 22 }, BR.length), facingDeg: 330 },
-    { labels: BAT, points: block({ x: -2.86, y: 14 }, 6, 2, 2) },
+    { labels: BR.filter((_, i) => i % 4 < 2), points: deepBrass.filter((_, i) => i % 4 < 2) },
+    { labels: BR.filter((_, i) => i % 4 >= 2), points: deepBrass.filter((_, i) => i % 4 >= 2), facingDeg: 180 },
+    { labels: BAT, points: block({ x: -2.86, y: 8 }, 6, 2, 2) },
   ]),
   // Woodwinds forward in a block; the brass wedge opens behind them.
   drillSet("14", 32, 3, [
@@ -136,5 +140,5 @@ export const HARBOR_RIDGE_SETS: DemoSet[] = [
   ]),
   drillSet("16", 32, 3, [...winds(companyFront(14)), { labels: BAT, points: row(0, 20, BAT.length, 2) }]),
   // The company front bows toward the box for the final chord (about 55 yards wide).
-  drillSet("17", 8, 3, [...winds(arc({ x: 0, y: 60 }, 50, 240, 300, windCount)), { labels: BAT, points: row(0, 18, BAT.length, 2) }]),
+  drillSet("17", 8, 3, [...winds(arc({ x: 0, y: 60 }, 50, 240, 300, windCount)), { labels: BAT, points: row(0, 14, BAT.length, 2) }]),
 ];

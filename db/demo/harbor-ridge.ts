@@ -21,7 +21,8 @@ export const HARBOR_RIDGE: DemoProgram = {
       // porous ground, G = 1; artificial turf's porosity varies with its infill, so G = 0 would be a guess.
       conditions: { temperatureC: 24, relativeHumidityPct: 55, pressureKPa: 101.325, groundFactor: 1 },
       listeningPoints: [
-        { name: "Press box", x: 0, y: -25, z: 18 },
+        // During a performance the crowd talks at about 55 dBA at the box (the preset's level, from memory).
+        { name: "Press box", x: 0, y: -25, z: 18, background: { preset: "crowd-during-performance" } },
         { name: "Front-row judge", x: 0, y: -8, z: 3 },
       ],
       performers: HARBOR_RIDGE_PERFORMERS,

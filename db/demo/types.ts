@@ -1,4 +1,5 @@
 // The shape of the demo data, as plain objects the loader turns into rows.
+import type { Background } from "@/lib/acoustics/background";
 import type { Conditions, Dynamic, VoiceOrTacet } from "@/lib/acoustics/types";
 import type { Role } from "@/db/schema";
 
@@ -59,6 +60,8 @@ export interface DemoListeningPoint {
   x: number;
   y: number;
   z: number;
+  /** What the point hears besides the band; stored once listening points carry a background. */
+  background?: Background;
 }
 
 export interface DemoShow {

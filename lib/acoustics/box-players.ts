@@ -3,6 +3,7 @@
 import { DEFAULT_INSTRUMENTS } from "./catalog";
 import { AcousticsInputError } from "./errors";
 import { sumLevelsDb } from "./levels";
+import { DEFAULT_SOURCE_HEIGHT_M } from "./validate";
 import type { AnalysisInput, Dynamic, Family, InstrumentCatalog, InstrumentSpec, PerformerInput, PointResult, Register, VoiceOrTacet } from "./types";
 
 /** The catalog in force for an input: the defaults with the input's instruments laid over them. */
@@ -21,6 +22,10 @@ export interface BoxPlayer {
   dynamic: Dynamic;
   x: number;
   y: number;
+  /** Distance (m) from the player to the listening point. */
+  distanceM: number;
+  /** A part marked solo (PerformerInput.solo). */
+  solo: boolean;
   /** A-weighted level of this player at the listening point (dBA). */
   dbA: number;
   /** Unweighted band levels at the listening point (dB). */
@@ -32,6 +37,7 @@ export interface BoxPlayer {
 export function soundingPlayers(input: AnalysisInput, point: PointResult): BoxPlayer[] {
   const catalog = catalogOf(input);
   const byId = new Map(point.performers.map((p) => [p.id, p]));
+  const lp = input.listeningPoints.find((p) => p.id === point.listeningPointId);
   return input.performers.flatMap((perf: PerformerInput) => {
     if (perf.voice === "tacet") return [];
     const res = byId.get(perf.id);
@@ -51,6 +57,8 @@ export function soundingPlayers(input: AnalysisInput, point: PointResult): BoxPl
         dynamic: perf.dynamic,
         x: perf.x,
         y: perf.y,
+        distanceM: lp ? Math.hypot(perf.x - lp.x, perf.y - lp.y, (perf.z ?? DEFAULT_SOURCE_HEIGHT_M) - lp.z) : 0,
+        solo: perf.solo === true,
         dbA: res.dbA,
         bandsDb: res.bandsDb,
         arrivalMs: res.arrivalMs,

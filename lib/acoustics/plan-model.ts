@@ -4,7 +4,7 @@
 // exact for whole dynamic steps: per-band source change, A-weighted at the point.
 import { OCTAVE_BANDS, BAND_COUNT } from "./bands";
 import { catalogOf, groupBy, soundingPlayers, type BoxPlayer } from "./box-players";
-import { PYRAMID_FAMILIES, REGISTERS_LOW_TO_HIGH } from "./checks";
+import { BATTERY_FAMILIES, PYRAMID_FAMILIES, REGISTERS_LOW_TO_HIGH, WIND_FAMILIES } from "./checks";
 import { instrumentBandsInto } from "./instrument";
 import type { MusicalLimits } from "./plan-limits";
 import type { BalanceTargets } from "./targets";
@@ -51,7 +51,7 @@ export interface ShapePair {
   hard: boolean;
 }
 
-export type TargetKind = "melody-lead" | "pyramid" | "blend";
+export type TargetKind = "melody-lead" | "battery" | "pyramid" | "blend";
 
 export interface Residual {
   kind: TargetKind;
@@ -221,9 +221,10 @@ export function buildPlanModel(
     const melody = byVoice.get("melody");
     if (melody) {
       const gm = group(melody);
+      // Over the other voices' winds only, as the melody-forward check: the battery has its own check.
       for (const v of VOICES) {
-        const list = byVoice.get(v);
-        if (v === "melody" || !list) continue;
+        const list = byVoice.get(v)?.filter((p) => WIND_FAMILIES.includes(p.family));
+        if (v === "melody" || !list?.length) continue;
         const gv = group(list);
         residuals.push({
           kind: "melody-lead",
@@ -236,10 +237,29 @@ export function buildPlanModel(
             const lead = t.melodyLeadDb - raw;
             return lead < 0 ? `the melody is ${dbWords(-lead)} under the ${v}` : `the melody leads the ${v} by only ${dbWords(lead)}`;
           },
-          aim: `the melody should lead every other voice by ${dbWords(t.melodyLeadDb)}`,
+          aim: `the melody should lead every other wind voice by ${dbWords(t.melodyLeadDb)}`,
           units: [...groupUnits(gm), ...groupUnits(gv)],
         });
       }
+    }
+
+    // The battery does not cover the winds (unless it carries the melody), as the battery-balance check.
+    const battery = players.filter((p) => BATTERY_FAMILIES.includes(p.family));
+    const winds = players.filter((p) => WIND_FAMILIES.includes(p.family));
+    if (battery.length && winds.length && !battery.some((p) => p.voice === "melody")) {
+      const gb = group(battery);
+      const gw = group(winds);
+      residuals.push({
+        kind: "battery",
+        terms: [{ group: gb, coef: 1 }, { group: gw, coef: -1 }],
+        c: -t.batteryOverWindsDb,
+        key: "battery",
+        set,
+        // raw = (battery − winds) − allowance
+        state: (raw) => `the battery is ${dbWords(raw + t.batteryOverWindsDb)} over the winds`,
+        aim: `the battery should sit at most ${dbWords(t.batteryOverWindsDb)} over the winds`,
+        units: [...groupUnits(gb), ...groupUnits(gw)],
+      });
     }
 
     // Pyramid within each choir, over the harmony voices.

@@ -4,25 +4,31 @@ import { AcousticsInputError, requireInRange } from "./errors";
 import { VOICES, type Voice } from "./types";
 
 /** Bumped whenever the checks or the plan compute differently, so stored results are recomputed. */
-export const BALANCE_VERSION = "farfield-balance-5";
+export const BALANCE_VERSION = "farfield-balance-6";
 
 export interface BalanceTargets {
-  /** melody-forward: the melody leads every other voice by at least this (dB). */
+  /** melody-forward: the melody's loudness level leads every other wind voice's by at least this (phon). */
   melodyLeadDb: number;
-  /** bass-up-pyramid: a lower register may sit at most this far below a higher one of its choir (dB). */
+  /** battery-balance: the battery's loudness level may exceed the winds' by at most this (phon). */
+  batteryOverWindsDb: number;
+  /** bass-up-pyramid: a lower register's loudness level may sit at most this far below a higher one's (phon). */
   pyramidToleranceDb: number;
   /** bass-up-pyramid: the voices whose players form the pyramid (the harmony under the lines). */
   pyramidVoices: Voice[];
-  /** depth-support: front-third players of an instrument may reach the box at most this much louder per player than back-third ones (dB). */
+  /** depth-support: an instrument's nearer players may be louder per player than its farther ones by at most this beyond what distance explains (phon). */
   depthToleranceDb: number;
   /** wide-form-edges: a form of wind players wider than this (m) is checked. */
   wideFormWidthM: number;
-  /** wide-form-edges: the end players may reach the box at most this much louder per player than the centre (dB). */
+  /** wide-form-edges: a section's players at the form's ends may be louder per player than the same section's centre by at most this (phon). */
   edgeToleranceDb: number;
-  /** stand-outs: a performer may be at most this far above the median of the rest of its section (dB). */
+  /** stand-outs: a performer may be at most this far above the median of the rest of its section and voice (phon). */
   standOutDb: number;
-  /** arrival-spread: the largest delay between the nearest and farthest sounding players (ms). */
+  /** arrival-spread: the largest delay between players within the level window of the loudest (ms). */
   arrivalSpreadMs: number;
+  /** arrival-spread: players more than this below the loudest player are left out (dB). */
+  arrivalWindowDb: number;
+  /** heard-at-box: each sounding voice rises above its masked threshold by at least this (dB). */
+  heardMarginDb: number;
   /** The plan: sections doubling one voice stay within this of each other at the box (dB). */
   blendToleranceDb: number;
   /** Set compare: a voice changing more than this from one set to the next is flagged (dB). */
@@ -30,29 +36,42 @@ export interface BalanceTargets {
 }
 
 /**
- * Defaults and where they come from:
+ * Defaults and where they come from. Levels the checks compare are loudness levels (phon, ISO 532-1),
+ * so a difference of 10 phon is twice or half as loud.
  * - melodyLeadDb 3: common practice, no source (a few dB of lead is the usual teaching).
- * - pyramidToleranceDb 1, pyramidVoices accompaniment + bass: common practice, no source (the
+ * - batteryOverWindsDb 3: common practice, no source (the battery sits with the winds, not over them).
+ * - pyramidToleranceDb 3, pyramidVoices accompaniment + bass: common practice, no source (the
  *   "pyramid of sound": lower voices at least as present as higher ones, for the harmony).
- * - depthToleranceDb 3: common practice, no source (front players listen back and blend).
- * - wideFormWidthM 36.576 (40 yd) and edgeToleranceDb 0: common practice, no source.
+ * - depthToleranceDb 3: common practice, no source (front players listen back and blend); what
+ *   distance alone explains is the spreading loss 20·lg(d_far / d_near) (ISO 9613-2, eq. 7).
+ * - wideFormWidthM 36.576 (40 yd) and edgeToleranceDb 2: common practice, no source.
  * - standOutDb 6: common practice, no source (6 dB is twice the sound pressure of the others).
- * - arrivalSpreadMs 100: the precedence (Haas) effect fuses a second arrival within roughly 30–40 ms
- *   for speech (Haas 1951); for music the echo threshold lies higher, some 50–100 ms depending on the
- *   attacks (from memory). A field-deep form always spreads 60 ms or more at the box, so 100 ms flags
- *   the forms whose back players will sound late there, not every set.
+ * - arrivalSpreadMs 50: a sound arriving 40–50 ms after the first is heard as an echo, provided it
+ *   is not masked (B. Truax, Handbook for Acoustic Ecology, "Precedence effect",
+ *   sfu.ca/sonic-studio-webdav/cmns/Handbook5/handbook/Precedence_Effect.html); sustained sounds
+ *   such as a band's fuse longer than clicks, so the upper end.
+ * - arrivalWindowDb 10: a later arrival more than about 10 dB below the first no longer competes
+ *   with it (M. Burg, J. Romney, E. Schwartz, Digital Sound & Music, "precedence effect",
+ *   wfu.tizrapublisher.com/digital-sound-and-music/218).
+ * - heardMarginDb −3: a voice up to 3 dB under its masked threshold (ISO/IEC 11172-3 Annex D,
+ *   audibility.ts) still counts as heard, since the threshold knows simultaneous masking only and a
+ *   listener also separates players by direction: spatial release from masking is several dB for
+ *   sources apart in azimuth (A. W. Bronkhorst, Acta Acustica 86:117–128, 2000; from memory).
  * - blendToleranceDb 6: common practice, no source.
  * - setChangeDb 3: common practice, no source (the sound should not jump from one set to the next).
  */
 export const DEFAULT_TARGETS: Readonly<BalanceTargets> = Object.freeze({
   melodyLeadDb: 3,
-  pyramidToleranceDb: 1,
+  batteryOverWindsDb: 3,
+  pyramidToleranceDb: 3,
   pyramidVoices: ["accompaniment", "bass"] as Voice[],
   depthToleranceDb: 3,
   wideFormWidthM: 40 * 0.9144,
-  edgeToleranceDb: 0,
+  edgeToleranceDb: 2,
   standOutDb: 6,
-  arrivalSpreadMs: 100,
+  arrivalSpreadMs: 50,
+  arrivalWindowDb: 10,
+  heardMarginDb: -3,
   blendToleranceDb: 6,
   setChangeDb: 3,
 });
@@ -60,12 +79,15 @@ export const DEFAULT_TARGETS: Readonly<BalanceTargets> = Object.freeze({
 /** Bounds a director's value must respect (a threshold outside them is a typo, not a choice). */
 export const TARGET_RANGES: Readonly<Record<Exclude<keyof BalanceTargets, "pyramidVoices">, [number, number]>> = Object.freeze({
   melodyLeadDb: [0, 20],
+  batteryOverWindsDb: [-10, 20],
   pyramidToleranceDb: [0, 20],
   depthToleranceDb: [0, 20],
   wideFormWidthM: [5, 120],
   edgeToleranceDb: [0, 20],
   standOutDb: [0, 30],
   arrivalSpreadMs: [1, 500],
+  arrivalWindowDb: [1, 40],
+  heardMarginDb: [-10, 20],
   blendToleranceDb: [0, 30],
   setChangeDb: [0, 30],
 });

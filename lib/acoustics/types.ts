@@ -68,6 +68,8 @@ export interface PerformerInput {
   z?: number;
   facingDeg: number;
   strengthDb?: number;
+  /** A part marked solo: never a stand-out of its section. */
+  solo?: boolean;
 }
 
 export interface ListeningPointInput {
@@ -129,12 +131,20 @@ export const CHECK_IDS = [
   "wide-form-edges",
   "stand-outs",
   "arrival-spread",
+  "battery-balance",
+  "heard-at-box",
 ] as const;
 export type CheckId = (typeof CHECK_IDS)[number];
 
+/** A check's verdict: "not-applicable" when it has nothing to judge (no melody, nobody sounding, one player). */
+export type CheckStatus = "pass" | "fail" | "not-applicable";
+
 export interface CheckResult {
   id: CheckId;
+  /** False only when the check fails; true also when it has nothing to judge (read `status`). */
   passed: boolean;
+  status: CheckStatus;
+  applicable: boolean;
   detail: string;
   performerIds: string[];
 }

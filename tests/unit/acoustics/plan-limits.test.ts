@@ -118,7 +118,8 @@ describe("musical limits: the cases a director would recognise", () => {
 
   it("changes nothing when every balance check passes as written, even with a target of its own (blend) missed", () => {
     const band = input([
-      ...[-2, 0, 2].map((x, k) => at({ id: `T${k}`, x, y: 8, voice: "melody", dynamic: "f" })),
+      // A trumpet melody at mp: at f it would mask the woodwinds' accompaniment (heard-at-box).
+      ...[-2, 0, 2].map((x, k) => at({ id: `T${k}`, x, y: 8, voice: "melody", dynamic: "mp" })),
       ...[-3, -1, 1, 3].map((x, k) => at({ id: `A${k}`, x, y: 14, instrument: "alto-sax", section: "Alto Saxes", voice: "accompaniment", dynamic: "mp" })),
       ...[-3, -1, 1, 3].map((x, k) => at({ id: `F${k}`, x, y: 14, instrument: "flute", section: "Flutes", voice: "accompaniment", dynamic: "p" })),
     ]);

@@ -13,7 +13,7 @@ import { ShowNav } from "@/components/ShowNav";
 import { CHECK_LABELS, VOICE_LABELS, formatDb } from "../music/voices";
 import { MiniField } from "@/components/MiniField";
 
-type Side = { set: { id: string; number: string }; mix: { totalDbA: number | null }; checks: { id: string; passed: boolean }[] };
+type Side = { set: { id: string; number: string }; mix: { totalDbA: number | null }; checks: { id: string; passed: boolean; status?: string }[] };
 type CompareResponse = {
   a: Side;
   b: Side;
@@ -65,7 +65,11 @@ export function CompareView({ showId, initialA, initialB }: { showId: string; in
               <Card key={side.set.id} title={`Set ${side.set.number}: ${formatDb(side.mix.totalDbA)} dBA`} titleId={`side-${i}`}>
                 <MiniField dots={(i === 0 ? fieldA : fieldB).data?.positions ?? []} highlight={changed} title={`Field at set ${side.set.number}; the players whose contribution changed most are larger and orange`} />
                 <ul className="mt-3 flex flex-wrap gap-2 text-sm">
-                  {side.checks.map((k) => <li key={k.id} className={`rounded px-2 py-1 ${k.passed ? "bg-turf-light text-signal-ok" : "bg-signal-bad text-white"}`}>{k.passed ? "✓" : "✗"} {CHECK_LABELS[k.id]}</li>)}
+                  {side.checks.map((k) => k.status === "not-applicable" ? (
+                    <li key={k.id} className="rounded bg-paper-sunk px-2 py-1 text-ink-soft">– {CHECK_LABELS[k.id]}: not applicable</li>
+                  ) : (
+                    <li key={k.id} className={`rounded px-2 py-1 ${k.passed ? "bg-turf-light text-signal-ok" : "bg-signal-bad text-white"}`}>{k.passed ? "✓" : "✗"} {CHECK_LABELS[k.id]}</li>
+                  ))}
                 </ul>
               </Card>
             ))}

@@ -1,6 +1,7 @@
 // The stored analysis's balance checks (pass or fail, in words and an icon, never colour alone) and
 // the suggested played dynamics. Choosing a failed check marks and selects its players on the field.
 import Link from "next/link";
+import { CHECK_MEANINGS } from "@/lib/music/check-labels";
 import { CHECK_LABELS, formatDb } from "../../music/voices";
 import type { AnalysisResponse } from "./editor-api";
 
@@ -70,14 +71,25 @@ export function ChecksPanel({
           {analysis.checks.map((c) => {
             const label = CHECK_LABELS[c.id] ?? c.id;
             const on = chosen === c.id;
+            const meaning = CHECK_MEANINGS[c.id];
             return (
-              <li key={c.id} data-testid={`check-${c.id}`} data-passed={String(c.passed)}>
-                {c.passed ? (
+              <li key={c.id} data-testid={`check-${c.id}`} data-passed={String(c.passed)} data-status={c.status ?? (c.passed ? "pass" : "fail")}>
+                {c.status === "not-applicable" ? (
+                  <div className="px-2 py-1 text-ink-soft">
+                    <div className="flex items-baseline justify-between gap-2 text-sm">
+                      <span className="font-semibold">{label}</span>
+                      <span className="shrink-0 font-semibold">Not applicable</span>
+                    </div>
+                    {meaning ? <p className="text-xs">{meaning}</p> : null}
+                    <p className="text-xs">{c.detail}</p>
+                  </div>
+                ) : c.passed ? (
                   <div className="px-2 py-1">
                     <div className="flex items-baseline justify-between gap-2 text-sm">
                       <span className="font-semibold">{label}</span>
                       <Verdict passed />
                     </div>
+                    {meaning ? <p className="text-xs text-ink-soft">{meaning}</p> : null}
                     <p className="text-xs text-ink-soft">{c.detail}</p>
                     <Certainty check={c} />
                   </div>
@@ -92,6 +104,7 @@ export function ChecksPanel({
                       <span className="font-semibold">{label}</span>
                       <Verdict passed={false} />
                     </span>
+                    {meaning ? <span className="block text-xs text-ink-soft">{meaning}</span> : null}
                     <span className="block text-xs">{c.detail}</span>
                     <Certainty check={c} />
                     <span className="mt-0.5 block text-xs font-semibold text-turf-dark">
