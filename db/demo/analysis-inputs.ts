@@ -26,12 +26,10 @@ export function demoSetInputs(show: DemoShow): DemoSetInput[] {
       roster,
       set: { order: i + 1, positions: Object.entries(s.positions).map(([label, pos]) => ({ performerId: label, ...pos })) },
       music: { phrases, assignments, overrides },
-      listeningPoints: show.listeningPoints.map((lp) => ({ id: lp.name, x: lp.x, y: lp.y, z: lp.z })),
+      listeningPoints: show.listeningPoints.map((lp) => ({ id: lp.name, x: lp.x, y: lp.y, z: lp.z, background: lp.background ?? null })),
       conditions: show.conditions,
       instruments: DEFAULT_INSTRUMENTS,
     });
-    // buildAnalysisInput keeps only the stored fields of a point: the demo's background goes back on.
-    input.listeningPoints = input.listeningPoints.map((lp, n) => ({ ...lp, background: show.listeningPoints[n]!.background ?? null }));
     return { number: s.number, phrase: phrase?.id ?? null, planLimits: show.phrases.find((p) => p.name === phrase?.id)?.planLimits ?? null, input };
   });
 }

@@ -68,7 +68,7 @@ export function demoRows(
     for (const show of program.shows) {
       const showId = randomUUID();
       rows.shows.push({ id: showId, programId, name: show.name, fieldRules: show.fieldRules, ...show.conditions });
-      show.listeningPoints.forEach(({ background: _, ...lp }, i) => rows.listeningPoints.push({ showId, ...lp, order: i + 1 }));
+      show.listeningPoints.forEach((lp, i) => rows.listeningPoints.push({ showId, ...lp, background: lp.background ?? null, order: i + 1 }));
 
       const performerIds = new Map<string, string>();
       for (const p of show.performers) {

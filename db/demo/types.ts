@@ -60,7 +60,7 @@ export interface DemoListeningPoint {
   x: number;
   y: number;
   z: number;
-  /** What the point hears besides the band; stored once listening points carry a background. */
+  /** What the point hears besides the band (none when absent). */
   background?: Background;
 }
 
