@@ -93,7 +93,8 @@ function bassUpPyramid(players: BoxPlayer[], t: BalanceTargets): CheckResult {
     for (let i = 0; i + 1 < present.length; i++) check(`in the ${FAMILY_NAMES[family]}`, present[i]!, present[i + 1]!);
   }
   // Across the band, the bass register carries every register above it.
-  const band = registers(harmony);
+  // Across the band only where both choirs play the harmony (else it is the one choir again).
+  const band = new Set(harmony.map((p) => p.family)).size > 1 ? registers(harmony) : [];
   if (band[0]?.register === "bass") for (const high of band.slice(1)) check("across the band", band[0], high);
   if (pairs === 0) return notApplicable("bass-up-pyramid", "No two registers of winds play the harmony here.");
   if (failures.length === 0) {

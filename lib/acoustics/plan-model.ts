@@ -1,14 +1,17 @@
 // The balance plan as numbers: sections that may change (units), the groups whose levels the
 // targets compare (voices, registers of a choir, sections within a voice), the targets as hinge
-// residuals in dB, and the musical limits (each unit's step range, the written shape). Levels are
-// exact for whole dynamic steps: per-band source change, A-weighted at the point.
+// residuals in dB, and the musical limits (each unit's step range, the written shape). A group's level
+// is its loudness level (phon, ISO 532-1, as the balance checks measure it) as written, moved by the
+// change of its A-weighted energy at the point when its sections play other dynamics: exact as
+// written, and monotone in every section's step, which the branch and bound needs.
 import { OCTAVE_BANDS, BAND_COUNT } from "./bands";
 import { catalogOf, groupBy, soundingPlayers, type BoxPlayer } from "./box-players";
 import { BATTERY_FAMILIES, PYRAMID_FAMILIES, REGISTERS_LOW_TO_HIGH, WIND_FAMILIES } from "./checks";
+import { groupLoudness } from "./group-loudness";
 import { instrumentBandsInto } from "./instrument";
 import type { MusicalLimits } from "./plan-limits";
 import type { BalanceTargets } from "./targets";
-import { DYNAMICS, VOICES, type AnalysisInput, type Dynamic, type InstrumentSpec, type PointResult, type Voice } from "./types";
+import { DYNAMICS, VOICES, type AnalysisInput, type CheckId, type Dynamic, type InstrumentSpec, type PointResult, type Voice } from "./types";
 import { aWeightingDb } from "./weighting";
 
 const A_WEIGHT_ENERGY = OCTAVE_BANDS.map((b) => 10 ** (aWeightingDb(b.exactHz) / 10));
@@ -51,7 +54,7 @@ export interface ShapePair {
   hard: boolean;
 }
 
-export type TargetKind = "melody-lead" | "battery" | "pyramid" | "blend";
+export type TargetKind = "melody-lead" | "battery" | "pyramid";
 
 export interface Residual {
   kind: TargetKind;
@@ -86,6 +89,8 @@ export interface PlanModel {
   heldEnergy: Float64Array;
   groupUnits: Int32Array[];
   stepEnergy: Float64Array[][];
+  /** Per group, its loudness level as written (phon) less its A-weighted energy level as written (dB). */
+  offsetDb: Float64Array;
   residuals: Residual[];
   shape: ShapePair[];
 }
@@ -185,7 +190,10 @@ export function buildPlanModel(
   limits: MusicalLimits,
   nothingToChange: boolean,
   setLabels?: readonly string[],
+  /** The checks that fail as written: only their targets are planned for (all when omitted). */
+  failing?: ReadonlySet<CheckId>,
 ): PlanModel {
+  const wants = (id: CheckId) => !failing || failing.has(id);
   const sets = inputs.map((input, n) => soundingPlayers(input, points[n]!));
   const units = findUnits(inputs, sets, limits, nothingToChange);
   const unitOf = new Map<string, number>();
@@ -195,6 +203,7 @@ export function buildPlanModel(
   const playerUnit: number[] = [];
   const playerBase: number[] = [];
   const playerEnergy: Float64Array[] = [];
+  const playerBands: number[][] = [];
   const groups: number[][] = [];
   const residuals: Residual[] = [];
   const unitsOfGroup: number[][] = [];
@@ -209,6 +218,7 @@ export function buildPlanModel(
       playerUnit.push(held ? -1 : unit!);
       playerBase.push(DYNAMICS.indexOf(p.dynamic));
       playerEnergy.push(energiesByDynamic(p, ratioCache));
+      playerBands.push(p.bandsDb);
     }
     const group = (list: BoxPlayer[]) => {
       groups.push(list.map((p) => index.get(p)!));
@@ -219,7 +229,7 @@ export function buildPlanModel(
     // Melody lead over every other voice.
     const byVoice = groupBy(players, (p) => p.voice);
     const melody = byVoice.get("melody");
-    if (melody) {
+    if (melody && wants("melody-forward")) {
       const gm = group(melody);
       // Over the other voices' winds only, as the melody-forward check: the battery has its own check.
       for (const v of VOICES) {
@@ -246,7 +256,7 @@ export function buildPlanModel(
     // The battery does not cover the winds (unless it carries the melody), as the battery-balance check.
     const battery = players.filter((p) => BATTERY_FAMILIES.includes(p.family));
     const winds = players.filter((p) => WIND_FAMILIES.includes(p.family));
-    if (battery.length && winds.length && !battery.some((p) => p.voice === "melody")) {
+    if (wants("battery-balance") && battery.length && winds.length && !battery.some((p) => p.voice === "melody")) {
       const gb = group(battery);
       const gw = group(winds);
       residuals.push({
@@ -262,51 +272,33 @@ export function buildPlanModel(
       });
     }
 
-    // Pyramid within each choir, over the harmony voices.
-    for (const family of PYRAMID_FAMILIES) {
-      const choir = players.filter((p) => p.family === family && (t.pyramidVoices as string[]).includes(p.voice));
-      const byRegister = groupBy(choir, (p) => p.register);
-      const present = REGISTERS_LOW_TO_HIGH.filter((r) => byRegister.has(r)).map((r) => ({ r, g: group(byRegister.get(r)!) }));
-      for (let i = 0; i < present.length; i++) {
-        for (let j = i + 1; j < present.length; j++) {
-          const low = present[i]!;
-          const high = present[j]!;
-          residuals.push({
-            kind: "pyramid",
-            terms: [{ group: high.g, coef: 1 }, { group: low.g, coef: -1 }],
-            c: -t.pyramidToleranceDb,
-            key: `pyramid:${family}:${low.r}:${high.r}`,
-            set,
-            // raw = (high − low) − tolerance
-            state: (raw) => `in the ${family === "brass" ? "brass" : "woodwinds"}, the ${low.r} register is ${dbWords(raw + t.pyramidToleranceDb)} under the ${high.r}`,
-            aim: "the lower voices should be at least as present as the higher ones",
-            units: [...groupUnits(low.g), ...groupUnits(high.g)],
-          });
-        }
+    // The pyramid, as the bass-up-pyramid check: within each choir each register against the next one
+    // up, and across the band the bass register against each register above it.
+    if (wants("bass-up-pyramid")) {
+      const harmony = players.filter((p) => PYRAMID_FAMILIES.includes(p.family) && (t.pyramidVoices as string[]).includes(p.voice));
+      const registers = (list: BoxPlayer[]) => {
+        const byRegister = groupBy(list, (p) => p.register);
+        return REGISTERS_LOW_TO_HIGH.filter((r) => byRegister.has(r)).map((r) => ({ r, g: group(byRegister.get(r)!) }));
+      };
+      const pair = (scope: string, where: string, low: { r: string; g: number }, high: { r: string; g: number }) =>
+        residuals.push({
+          kind: "pyramid",
+          terms: [{ group: high.g, coef: 1 }, { group: low.g, coef: -1 }],
+          c: -t.pyramidToleranceDb,
+          key: `pyramid:${scope}:${low.r}:${high.r}`,
+          set,
+          // raw = (high − low) − tolerance
+          state: (raw) => `${where}, the ${low.r} register is ${dbWords(raw + t.pyramidToleranceDb)} under the ${high.r}`,
+          aim: "the lower voices should be at least as present as the higher ones",
+          units: [...groupUnits(low.g), ...groupUnits(high.g)],
+        });
+      for (const family of PYRAMID_FAMILIES) {
+        const present = registers(harmony.filter((p) => p.family === family));
+        for (let i = 0; i + 1 < present.length; i++) pair(family, `in the ${family === "brass" ? "brass" : "woodwinds"}`, present[i]!, present[i + 1]!);
       }
-    }
-
-    // Blend: sections doubling a voice stay within the tolerance of each other.
-    for (const [voice, list] of byVoice) {
-      const bySection = [...groupBy(list, (p) => p.section)].map(([section, l]) => ({ section, g: group(l) }));
-      for (let i = 0; i < bySection.length; i++) {
-        for (let j = 0; j < bySection.length; j++) {
-          if (i === j) continue;
-          const a = bySection[i]!;
-          const b = bySection[j]!;
-          residuals.push({
-            kind: "blend",
-            terms: [{ group: a.g, coef: 1 }, { group: b.g, coef: -1 }],
-            c: -t.blendToleranceDb,
-            key: `blend:${voice}:${a.section}:${b.section}`,
-            set,
-            // raw = (a − b) − tolerance
-            state: (raw) => `in the ${voice}, the ${a.section} are ${dbWords(raw + t.blendToleranceDb)} over the ${b.section}`,
-            aim: `sections sharing a part should sit within ${dbWords(t.blendToleranceDb)} of each other`,
-            units: [...groupUnits(a.g), ...groupUnits(b.g)],
-          });
-        }
-      }
+      // Across the band only where both choirs play the harmony (else it is the one choir again).
+      const band = new Set(harmony.map((p) => p.family)).size > 1 ? registers(harmony) : [];
+      if (band[0]?.r === "bass") for (const high of band.slice(1)) pair("band", "across the band", band[0], high);
     }
   });
 
@@ -319,7 +311,12 @@ export function buildPlanModel(
     residuals,
     shape: limits.keepShape ? shapePairs(units) : [],
   };
-  return { ...model, ...stepTables(model) };
+  // Each group's loudness level as written, against its A-weighted level as written.
+  const offsetDb = Float64Array.from(groups, (members) => {
+    const written = members.reduce((e, p) => e + playerEnergy[p]![playerBase[p]!]!, 0);
+    return groupLoudness(members.map((p) => ({ bandsDb: playerBands[p]! }))).phon - 10 * Math.log10(written);
+  });
+  return { ...model, ...stepTables(model), offsetDb };
 }
 
 /** Step tables of the groups (see PlanModel). */
@@ -361,7 +358,7 @@ function groupLevel(m: PlanModel, g: number, k: ArrayLike<number>, share?: Float
     e += ej;
   }
   if (share) for (let j = 0; j < share.length; j++) share[j]! /= e;
-  return 10 * Math.log10(e);
+  return 10 * Math.log10(e) + m.offsetDb[g]!;
 }
 
 /** Group levels at whole steps k per unit (exact); with `share`, each playing unit's share of its groups' energy. */

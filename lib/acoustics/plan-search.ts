@@ -114,8 +114,8 @@ export function searchPlan(m: PlanModel, change: readonly number[][], nodeLimit 
         eHi += tableMax[g]![j]!;
       }
     }
-    lo[g] = 10 * Math.log10(eLo);
-    hi[g] = 10 * Math.log10(eHi);
+    lo[g] = 10 * Math.log10(eLo) + m.offsetDb[g]!;
+    hi[g] = 10 * Math.log10(eHi) + m.offsetDb[g]!;
   };
   for (let g = 0; g < G; g++) groupBounds(g);
   const resBound = new Float64Array(m.residuals.length);

@@ -88,8 +88,10 @@ export function planProblem(
     evaluator.evaluate();
     return evaluator.result().points[0]!;
   });
-  const nothingToChange = full.length > 0 && full.every((input, n) => checkBalance(input, points[n]!, t).every((c) => c.passed));
-  const model = buildPlanModel(full, points, t, l, nothingToChange, setLabels);
+  // The plan serves the targets of the checks that fail as written somewhere in the phrase.
+  const failing = new Set(full.flatMap((input, n) => checkBalance(input, points[n]!, t).filter((c) => !c.passed).map((c) => c.id)));
+  const nothingToChange = full.length > 0 && failing.size === 0;
+  const model = buildPlanModel(full, points, t, l, nothingToChange, setLabels, failing);
   const change = unitChangeDb(model);
   return {
     model,

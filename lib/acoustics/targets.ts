@@ -29,7 +29,7 @@ export interface BalanceTargets {
   arrivalWindowDb: number;
   /** heard-at-box: each sounding voice rises above its masked threshold by at least this (dB). */
   heardMarginDb: number;
-  /** The plan: sections doubling one voice stay within this of each other at the box (dB). */
+  /** Kept for stored targets; since balance version 6 the plan serves only the checks' targets and no longer uses it (dB). */
   blendToleranceDb: number;
   /** Set compare: a voice changing more than this from one set to the next is flagged (dB). */
   setChangeDb: number;
@@ -57,7 +57,7 @@ export interface BalanceTargets {
  *   audibility.ts) still counts as heard, since the threshold knows simultaneous masking only and a
  *   listener also separates players by direction: spatial release from masking is several dB for
  *   sources apart in azimuth (A. W. Bronkhorst, Acta Acustica 86:117–128, 2000; from memory).
- * - blendToleranceDb 6: common practice, no source.
+ * - blendToleranceDb 6: no longer used (the plan serves the checks that fail as written).
  * - setChangeDb 3: common practice, no source (the sound should not jump from one set to the next).
  */
 export const DEFAULT_TARGETS: Readonly<BalanceTargets> = Object.freeze({

@@ -31,7 +31,8 @@ export function planSubject(sb: ShowBalance, phraseId: string, listeningPointId:
 
 export function phrasePlan(sb: ShowBalance, phraseId: string, listeningPointId: string) {
   const { phrase, point } = planSubject(sb, phraseId, listeningPointId);
-  const lp = [{ id: point.id, x: point.x, y: point.y, z: point.z }];
+  // The point as the stored analysis sees it: with its ground and its background.
+  const lp = sb.ctx.listeningPoints.filter((l) => l.id === point.id);
   const sets = sb.sets.filter((s) => s.order >= phrase.firstOrder && s.order <= phrase.lastOrder && s.positions.length > 0);
   const inputs = sets.map((s) => {
     const { played, written } = setInputs(sb.ctx, { order: s.order, positions: s.positions });

@@ -38,12 +38,13 @@ describe("balance targets", () => {
     const before = await ids.director.get(path);
     expect(before.body.reused).toBe(true);
     const spread = before.body.mix.arrivalSpreadMs as number;
-    // A limit just above the set's spread passes; just below it fails.
-    expect((await ids.director.put(targetsPath(), { targets: { arrivalSpreadMs: Math.ceil(spread) + 1 } })).status).toBe(200);
+    // With a level window wide enough to take in every player, a limit just above the set's spread passes; just below it fails.
+    const wide = { arrivalWindowDb: 40 };
+    expect((await ids.director.put(targetsPath(), { targets: { ...wide, arrivalSpreadMs: Math.ceil(spread) + 1 } })).status).toBe(200);
     const passing = await ids.director.get(path);
     expect(passing.body.reused).toBe(false);
     expect(passing.body.checks.find((c: any) => c.id === "arrival-spread").passed).toBe(true);
-    expect((await ids.director.put(targetsPath(), { targets: { arrivalSpreadMs: Math.max(1, Math.floor(spread) - 1) } })).status).toBe(200);
+    expect((await ids.director.put(targetsPath(), { targets: { ...wide, arrivalSpreadMs: Math.max(1, Math.floor(spread) - 1) } })).status).toBe(200);
     const failing = await ids.director.get(path);
     expect(failing.body.checks.find((c: any) => c.id === "arrival-spread").passed).toBe(false);
     expect((await ids.director.put(targetsPath(), { reset: true })).status).toBe(200);

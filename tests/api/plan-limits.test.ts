@@ -75,8 +75,11 @@ describe("musical limits", () => {
 
   it("a director's show limit and phrase limit change the plan: one step for the show, the shape let go for a phrase", async () => {
     const base = `/api/shows/${copy.showId}`;
-    const fanfare = (await copy.client.get(`${base}/plan-limits`)).body.phrases.find((p: any) => p.name === "Fanfare");
-    const planOf = async () => (await copy.client.get(`${base}/phrases/${fanfare.id}/plan?listeningPointId=${copy.pressBoxId}`)).body;
+    // The clarinets' song: the one demo phrase whose plan moves winds by two steps and more.
+    const song = (await copy.client.get(`${base}/plan-limits`)).body.phrases.find((p: any) => p.name === "Clarinet song");
+    const planOf = async () => (await copy.client.get(`${base}/phrases/${song.id}/plan?listeningPointId=${copy.pressBoxId}`)).body;
+    const own = song.custom;
+    expect((await copy.client.put(`${base}/plan-limits`, { phraseId: song.id, limits: null })).status).toBe(200);
     const before = await planOf();
     expect(before.entries.some((e: any) => e.kind === "winds" && Math.abs(ORDER.indexOf(e.playedDynamic) - ORDER.indexOf(e.writtenDynamic)) === 2)).toBe(true);
 
@@ -85,10 +88,11 @@ describe("musical limits", () => {
     expect(tight.limits).toEqual({ windSteps: 1, percussionSteps: 1, keepShape: true });
     expect(broken(tight, tight.limits)).toEqual([]);
 
-    expect((await copy.client.put(`${base}/plan-limits`, { phraseId: fanfare.id, limits: { windSteps: 6, keepShape: false } })).status).toBe(200);
+    expect((await copy.client.put(`${base}/plan-limits`, { phraseId: song.id, limits: { windSteps: 6, keepShape: false } })).status).toBe(200);
     expect((await planOf()).limits).toEqual({ windSteps: 6, percussionSteps: 1, keepShape: false });
-    expect((await copy.client.put(`${base}/plan-limits`, { phraseId: fanfare.id, limits: null })).status).toBe(200);
+    expect((await copy.client.put(`${base}/plan-limits`, { phraseId: song.id, limits: null })).status).toBe(200);
     expect((await copy.client.put(`${base}/plan-limits`, { limits: null })).status).toBe(200);
     expect((await planOf()).entries).toEqual(before.entries);
+    expect((await copy.client.put(`${base}/plan-limits`, { phraseId: song.id, limits: own })).status).toBe(200);
   });
 });

@@ -31,7 +31,8 @@ describe("advisePlan", () => {
 
   it("explains the clarinets' rise with their carry and the melody's place under the accompaniment as written, at the point", () => {
     const written = analyzeSet(band).points[0]!;
-    const under = written.voices.accompaniment!.dbA - written.voices.melody!.dbA;
+    // The plan states the gap as the checks measure it: in loudness level (phon, ISO 532-1).
+    const under = written.loudness!.voices.accompaniment!.phon - written.loudness!.voices.melody!.phon;
     expect(under).toBeGreaterThan(1);
     expect(clarinets.playedDynamic).not.toBe("p");
     expect(clarinets.why).toBe(

@@ -10,7 +10,6 @@ export const TARGET_FIELDS = [
   { key: "arrivalSpreadMs", label: "Arrival spread: first to last arrival among the players you hear best at most", unit: "ms", step: 5, basis: "echo at 40–50 ms (Truax, Handbook for Acoustic Ecology)" },
   { key: "arrivalWindowDb", label: "Arrival spread: count players within this of the loudest", unit: "dB", step: 1, basis: "precedence needs levels within about 10 dB (Burg, Romney, Schwartz, Digital Sound & Music)" },
   { key: "heardMarginDb", label: "Heard at the box: a voice counts as heard down to this far from its masked threshold", unit: "dB", step: 0.5, basis: "ISO/IEC 11172-3 masking, less a few dB for direction (from memory)" },
-  { key: "blendToleranceDb", label: "Balance plan: sections doubling a voice stay within", unit: "dB", step: 0.5, basis: "common practice, no source" },
   { key: "setChangeDb", label: "Set compare: flag a voice that changes from one set to the next by more than", unit: "dB", step: 0.5, basis: "common practice, no source" },
 ] as const;
 
