@@ -88,6 +88,6 @@ describe("GET analysis: loudness at the listening point", () => {
     }
     // The existing fields stay as they were.
     expect(typeof mix.totalDbA).toBe("number");
-    expect(res.body.checks).toHaveLength(6);
+    expect(res.body.checks).toHaveLength(8); // shared/API.md's six, then battery-balance and heard-at-box
   });
 });

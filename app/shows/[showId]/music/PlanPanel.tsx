@@ -93,7 +93,7 @@ export function PlanPanel({ showId, phrase, canAdopt, listeningPoints }: { showI
               return (
                 <li key={s.setId} className="text-sm">
                   <span className="font-semibold">Set {s.number}:</span> as played now{" "}
-                  <Verdict passed={b.passed} /> melody {formatDb(s.before.voices.melody?.dbA)} dBA → with the plan <Verdict passed={a.passed} /> melody {formatDb(s.after.voices.melody?.dbA)} dBA
+                  <Verdict check={b} /> melody {formatDb(s.before.voices.melody?.dbA)} dBA → with the plan <Verdict check={a} /> melody {formatDb(s.after.voices.melody?.dbA)} dBA
                 </li>
               );
             })}
@@ -114,6 +114,7 @@ export function PlanPanel({ showId, phrase, canAdopt, listeningPoints }: { showI
   );
 }
 
-function Verdict({ passed }: { passed: boolean }) {
-  return passed ? <span className="font-semibold text-signal-ok">✓ {CHECK_LABELS["melody-forward"]}</span> : <span className="font-semibold text-signal-bad">✗ not forward</span>;
+function Verdict({ check }: { check: { passed: boolean; status?: string } }) {
+  if (check.status === "not-applicable") return <span className="text-ink-soft">– no melody to judge</span>;
+  return check.passed ? <span className="font-semibold text-signal-ok">✓ {CHECK_LABELS["melody-forward"]}</span> : <span className="font-semibold text-signal-bad">✗ not forward</span>;
 }

@@ -12,7 +12,7 @@ export type MusicResponse = {
   canEdit: boolean;
   canAdopt: boolean;
 };
-export type CheckDto = { id: string; passed: boolean; detail: string; performerIds: string[] };
+export type CheckDto = { id: string; passed: boolean; status?: "pass" | "fail" | "not-applicable"; applicable?: boolean; detail: string; performerIds: string[] };
 export type PlanEntryDto = {
   section: string;
   writtenDynamic: string;
