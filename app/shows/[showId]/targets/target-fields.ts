@@ -8,7 +8,7 @@ export const TARGET_FIELDS = [
   { key: "edgeToleranceDb", label: "Wide-form edges: a section's end players may be louder than its centre by at most", unit: "phon", step: 0.5, basis: "common practice, no source" },
   { key: "standOutDb", label: "Stand-outs: a player may be above the rest of the section's part by at most", unit: "phon", step: 0.5, basis: "common practice, no source" },
   { key: "arrivalSpreadMs", label: "Arrival spread: first to last arrival among the players you hear best at most", unit: "ms", step: 5, basis: "echo at 40–50 ms (Truax, Handbook for Acoustic Ecology)" },
-  { key: "arrivalWindowDb", label: "Arrival spread: count players within this of the loudest", unit: "dB", step: 1, basis: "precedence needs levels within about 10 dB (Burg, Romney, Schwartz, Digital Sound & Music)" },
+  { key: "arrivalWindowDb", label: "Arrival window: compare only the players within this of the loudest", unit: "dB", step: 1, basis: "precedence needs levels within about 10 dB (Burg, Romney, Schwartz, Digital Sound & Music)" },
   { key: "heardMarginDb", label: "Heard at the box: a voice counts as heard down to this far from its masked threshold", unit: "dB", step: 0.5, basis: "ISO/IEC 11172-3 masking, less a few dB for direction (from memory)" },
   { key: "setChangeDb", label: "Set compare: flag a voice that changes from one set to the next by more than", unit: "dB", step: 0.5, basis: "common practice, no source" },
 ] as const;
