@@ -1,6 +1,6 @@
 // Harbor Ridge's drill (invented): 18 sets over three movements. Every marching member has a
 // dot in every set; the front ensemble stays put in front of the front sideline.
-import { arc, block, line, row, translate, wedge, type Point } from "./geometry";
+import { arc, block, line, row, steps, translate, wedge, type Point } from "./geometry";
 import { GROUPS, HARBOR_RIDGE_PERFORMERS } from "./harbor-ridge-roster";
 import type { DemoPosition, DemoSet } from "./types";
 
@@ -51,8 +51,8 @@ function winds(points: Point[], facingDeg = 0): Form[] {
 const windCount = WW.length + BR.length;
 const companyFront = (y: number) => row(0, y, windCount, 2); // 2-step interval: side-1 17 to side-2 17
 const brassBlock = block({ x: -4, y: 17 }, 8, 4, 2).slice(0, BR.length); // trumpets in the front row
-// Eight files of four ranks 10 steps apart, filled file by file, so each section has players in front and back.
-const deepBrass = block({ x: 6, y: 10 }, 8, 4, 10, "files").slice(0, BR.length);
+// Eight files 3 steps apart of four ranks 10 steps apart, filled file by file, so each section has players in front and back.
+const deepBrass = Array.from({ length: 32 }, (_, i) => ({ x: 8 + steps(3) * Math.floor(i / 4), y: 12 + steps(10) * (i % 4) })).slice(0, BR.length);
 const withoutSoloist = BR.filter((l) => l !== SOLOIST);
 const brassBlockNoSolo = brassBlock.filter((_, i) => BR[i] !== SOLOIST);
 const ballad = (clarinetY: number): Form[] => [
@@ -121,7 +121,7 @@ export const HARBOR_RIDGE_SETS: DemoSet[] = [
     { labels: BAT, points: block({ x: -2.86, y: 12 }, 6, 2, 2) },
   ]),
   // The brass in a deep block, its back two ranks turned upstage for the visual: the back of the field goes thin.
-  drillSet("13", 16, 3, [
+  drillSet("13", 32, 3, [
     { labels: WW, points: line({ x: -27, y: 22 }, { x: -4, y: 30 }, WW.length), facingDeg: 30 },
     { labels: BR.filter((_, i) => i % 4 < 2), points: deepBrass.filter((_, i) => i % 4 < 2) },
     { labels: BR.filter((_, i) => i % 4 >= 2), points: deepBrass.filter((_, i) => i % 4 >= 2), facingDeg: 180 },

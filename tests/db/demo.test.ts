@@ -164,7 +164,7 @@ describe("demo data", () => {
     expect(strong).toBeGreaterThanOrEqual(1);
   });
 
-  it("has phrases that voice every section, including the clarinet melody p over brass p", async () => {
+  it("has phrases that voice every section, including the clarinet melody p under a brass chorale written louder", async () => {
     const sql = conn.client;
     const phrases = await sql`
       select ph.id, ph.name, f."order" as first_order, l."order" as last_order from phrases ph
@@ -182,10 +182,10 @@ describe("demo data", () => {
     const wanted: Record<string, [string, string]> = {
       Clarinets: ["melody", "p"],
       Trumpets: ["accompaniment", "p"],
-      Mellophones: ["accompaniment", "p"],
-      Trombones: ["accompaniment", "p"],
-      Baritones: ["accompaniment", "p"],
-      Tubas: ["bass", "p"],
+      Mellophones: ["accompaniment", "mp"],
+      Trombones: ["accompaniment", "mp"],
+      Baritones: ["accompaniment", "mp"],
+      Tubas: ["bass", "f"],
     };
     const matching = phrases.filter((ph) =>
       Object.entries(wanted).every(([section, [voice, dyn]]) =>
