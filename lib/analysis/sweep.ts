@@ -10,6 +10,8 @@ export interface SweepSample {
   totalDbA: number | null;
   voices: Record<string, number | null>;
   failing: CheckId[];
+  /** Checks with nothing to judge at this count (no melody, nobody sounding…): neither a pass nor a failure. */
+  notApplicable?: CheckId[];
 }
 
 const finite = (v: number) => (Number.isFinite(v) ? v : null);
@@ -42,11 +44,13 @@ export function sweepTransition(to: AnalysisInput, fromPositions: readonly Posit
     for (const point of result.points) {
       const voices: Record<string, number | null> = {};
       for (const v of VOICES) voices[v] = finite(point.voices[v]?.dbA ?? -Infinity);
+      const checks = checkBalance(input, point, targets);
       out[point.listeningPointId]!.push({
         count,
         totalDbA: finite(point.totalDbA),
         voices,
-        failing: checkBalance(input, point, targets).filter((c) => !c.passed).map((c) => c.id),
+        failing: checks.filter((c) => !c.passed).map((c) => c.id),
+        notApplicable: checks.filter((c) => c.status === "not-applicable").map((c) => c.id),
       });
     }
   }

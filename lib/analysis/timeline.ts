@@ -1,4 +1,5 @@
 // The show timeline at one listening point: every set's sweep laid end to end on one count axis. Pure.
+import { CHECK_IDS } from "@/lib/acoustics/types";
 import type { SetSweep } from "./show-sweeps";
 
 export function showTimeline(sweeps: SetSweep[], listeningPointId: string) {
@@ -11,7 +12,17 @@ export function showTimeline(sweeps: SetSweep[], listeningPointId: string) {
     for (const sample of list) samples.push({ showCount: start + sample.count, setId: s.setId, setNumber: s.number, ...sample });
     start += list.length && list[0]!.count > 0 ? s.counts : 0;
     const last = list[list.length - 1];
-    sets.push({ setId: s.setId, number: s.number, order: s.order, counts: s.counts, startCount: first, showCount: start, failing: last?.failing ?? [] });
+    sets.push({
+      setId: s.setId,
+      number: s.number,
+      order: s.order,
+      counts: s.counts,
+      startCount: first,
+      showCount: start,
+      failing: last?.failing ?? [],
+      // A set nobody stands in has nothing to judge: every check is not applicable, none passes.
+      notApplicable: last ? (last.notApplicable ?? []) : [...CHECK_IDS],
+    });
   }
   return { listeningPointId, sets, samples };
 }

@@ -103,14 +103,15 @@ export function TimelineView({ showId }: { showId: string }) {
                     <th scope="row" className="sticky left-0 bg-paper-raised px-2 py-1 text-left font-medium whitespace-nowrap">{CHECK_LABELS[c]}</th>
                     {t.sets.map((s) => {
                       const fails = s.failing.includes(c);
+                      const idle = !fails && (s.notApplicable ?? []).includes(c);
                       return (
                         <td key={s.setId} className="p-0.5">
                           <Link
                             href={setHref(s.setId)}
-                            aria-label={`Set ${s.number}: ${CHECK_LABELS[c]} ${fails ? "fails" : "passes"}`}
-                            className={`flex h-9 w-9 items-center justify-center rounded font-bold ${fails ? "bg-signal-bad text-white" : "bg-turf-light text-signal-ok"}`}
+                            aria-label={`Set ${s.number}: ${CHECK_LABELS[c]} ${fails ? "fails" : idle ? "not applicable (nothing to judge)" : "passes"}`}
+                            className={`flex h-9 w-9 items-center justify-center rounded font-bold ${fails ? "bg-signal-bad text-white" : idle ? "bg-paper-sunk text-ink-faint" : "bg-turf-light text-signal-ok"}`}
                           >
-                            {fails ? "✗" : "✓"}
+                            {fails ? "✗" : idle ? "–" : "✓"}
                           </Link>
                         </td>
                       );
@@ -121,7 +122,13 @@ export function TimelineView({ showId }: { showId: string }) {
             </table>
           </div>
           <h3 className="mt-4 font-semibold">Where the balance breaks</h3>
-          {failingSets.length === 0 ? <p className="text-signal-ok">Every check passes at every set.</p> : (
+          {failingSets.length === 0 ? (
+            t.sets.every((s) => (s.notApplicable ?? []).length === CHECKS.length) ? (
+              <p className="text-ink-soft">Nothing to judge yet: no set has players sounding at this listening point.</p>
+            ) : (
+              <p className="text-signal-ok">No check fails at any set{t.sets.some((s) => (s.notApplicable ?? []).length) ? " (a dash: nothing to judge there)" : ""}.</p>
+            )
+          ) : (
             <ul className="mt-1 space-y-1" aria-label="Failing checks by set">
               {failingSets.map((s) => (
                 <li key={s.setId}>
