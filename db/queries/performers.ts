@@ -9,7 +9,8 @@ export type AddPerformersResult =
   | { ok: true; performers: (NewPerformerRow & { id: string })[] }
   | { ok: false; reason: "label-taken" };
 
-const performerColumns = {
+/** A performer as the API answers it (the roster, adding and changing one). */
+export const performerColumns = {
   id: performers.id,
   label: performers.label,
   instrument: performers.instrument,

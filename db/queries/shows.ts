@@ -3,6 +3,7 @@ import type { Background } from "@/lib/acoustics/background";
 import { db } from "../client";
 import { listeningPoints, performers, phrases, positions, sets, shows } from "../schema";
 import { listeningPointColumns } from "./listening-points";
+import { performerColumns } from "./performers";
 
 export async function findShow(showId: string) {
   const rows = await db.select().from(shows).where(eq(shows.id, showId)).limit(1);
@@ -42,15 +43,7 @@ export async function listListeningPoints(showId: string) {
 
 export async function listPerformers(showId: string) {
   return db
-    .select({
-      id: performers.id,
-      label: performers.label,
-      instrument: performers.instrument,
-      section: performers.section,
-      part: performers.part,
-      strengthDb: performers.strengthDb,
-      name: performers.name,
-    })
+    .select(performerColumns)
     .from(performers)
     .where(eq(performers.showId, showId))
     .orderBy(asc(performers.section), asc(performers.label));

@@ -32,9 +32,24 @@ function whoOf(e: PlanEntryDetail, ctx: AdviceContext): string {
   return `${e.section} soloist${label ? ` (${label})` : ""}`;
 }
 
+/** The instrument most of the section plays (a Clarinets section with one bass clarinet speaks of clarinets). */
+function mainInstrument(e: PlanEntryDetail, ctx: AdviceContext): InstrumentSpec | undefined {
+  const tally = new Map<string, { n: number; spec: InstrumentSpec }>();
+  for (const id of e.performerIds) {
+    const spec = ctx.performer(id)?.spec;
+    if (!spec) continue;
+    const t = tally.get(spec.name) ?? { n: 0, spec };
+    t.n++;
+    tally.set(spec.name, t);
+  }
+  let best: { n: number; spec: InstrumentSpec } | undefined;
+  for (const t of tally.values()) if (!best || t.n > best.n) best = t;
+  return best?.spec;
+}
+
 /** "clarinets carry poorly outdoors, and " when the section rises and its instrument carries poorly. */
 function carryClause(e: PlanEntryDetail, ctx: AdviceContext): string {
-  const spec = ctx.performer(e.performerIds[0]!)?.spec;
+  const spec = mainInstrument(e, ctx);
   if (!spec || e.changeDb <= 0 || spec.carryDb > POOR_CARRY_DB) return "";
   return `${plural(spec.name)} carry poorly outdoors, and `;
 }

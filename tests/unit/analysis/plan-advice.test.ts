@@ -8,7 +8,8 @@ import { AIR, BOX, facingToward, performer } from "../acoustics/helpers";
 const at = (over: Partial<PerformerInput> & { id: string; x: number; y: number }) => performer({ facingDeg: facingToward(over.x, over.y, BOX.x, BOX.y), ...over });
 const band: AnalysisInput = {
   performers: [
-    ...[-6, -3, 0, 3, 6].map((x, k) => at({ id: `C${k}`, x, y: 20, instrument: "clarinet", section: "Clarinets", voice: "melody", dynamic: "p" })),
+    // The section's first player is its one bass clarinet: the advice speaks of what most of it plays.
+    ...[-6, -3, 0, 3, 6].map((x, k) => at({ id: `C${k}`, x, y: 20, instrument: k === 0 ? "bass-clarinet" : "clarinet", section: "Clarinets", voice: "melody", dynamic: "p" })),
     ...[-6, -2, 2, 6].map((x, k) => at({ id: `T${k}`, x, y: 24, section: "Trumpets", voice: "accompaniment", dynamic: "p" })),
     // A soloist: one trumpet of a section that otherwise rests.
     at({ id: "S1", x: 0, y: 12, section: "Horns", instrument: "mellophone", voice: "countermelody", dynamic: "mp" }),
