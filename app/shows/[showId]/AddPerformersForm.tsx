@@ -5,10 +5,10 @@ import { Button } from "@/components/Button";
 import { errorText } from "@/components/error-text";
 import { sendJson } from "@/components/fetcher";
 import { FormMessage } from "@/components/FormMessage";
+import { FIELD_INPUT } from "@/components/form-styles";
 import { plural } from "@/components/format";
 import { INSTRUMENT_OPTIONS } from "./instrument-options";
 
-const input = "mt-1 block min-h-11 w-full rounded-lg border border-ink/30 bg-paper-raised px-2";
 const EMPTY = { instrument: "trumpet", count: "1", section: "", part: "", strengthDb: "0", label: "", name: "" };
 
 export function AddPerformersForm({ showId, onAdded }: { showId: string; onAdded(): Promise<unknown> }) {
@@ -56,35 +56,35 @@ export function AddPerformersForm({ showId, onAdded }: { showId: string; onAdded
       <div className="grid gap-3 sm:grid-cols-4">
         <label className="text-sm font-semibold sm:col-span-2">
           Instrument
-          <select className={input} value={draft.instrument} onChange={set("instrument")}>
+          <select className={FIELD_INPUT} value={draft.instrument} onChange={set("instrument")}>
             {INSTRUMENT_OPTIONS.map((o) => <option key={o.key} value={o.key}>{o.name}</option>)}
           </select>
         </label>
         <label className="text-sm font-semibold">
           How many
-          <input className={input} type="number" min={1} max={50} value={draft.count} onChange={set("count")} />
+          <input className={FIELD_INPUT} type="number" min={1} max={50} value={draft.count} onChange={set("count")} />
         </label>
         <label className="text-sm font-semibold">
           Strength in dB
-          <input className={input} type="number" min={-6} max={6} step={0.5} value={draft.strengthDb} onChange={set("strengthDb")} />
+          <input className={FIELD_INPUT} type="number" min={-6} max={6} step={0.5} value={draft.strengthDb} onChange={set("strengthDb")} />
         </label>
         <label className="text-sm font-semibold sm:col-span-2">
           Section <span className="font-normal text-ink-soft">(blank: the roster&rsquo;s section for this instrument)</span>
-          <input className={input} value={draft.section} onChange={set("section")} list="roster-sections" maxLength={60} />
+          <input className={FIELD_INPUT} value={draft.section} onChange={set("section")} list="roster-sections" maxLength={60} />
         </label>
         <label className="text-sm font-semibold sm:col-span-2">
           Part <span className="font-normal text-ink-soft">(optional)</span>
-          <input className={input} value={draft.part} onChange={set("part")} maxLength={40} placeholder="e.g. 2nd" />
+          <input className={FIELD_INPUT} value={draft.part} onChange={set("part")} maxLength={40} placeholder="e.g. 2nd" />
         </label>
         {one ? (
           <>
             <label className="text-sm font-semibold sm:col-span-2">
               Label <span className="font-normal text-ink-soft">(blank: the next free one, e.g. T5)</span>
-              <input className={input} value={draft.label} onChange={set("label")} maxLength={16} />
+              <input className={FIELD_INPUT} value={draft.label} onChange={set("label")} maxLength={16} />
             </label>
             <label className="text-sm font-semibold sm:col-span-2">
               Name <span className="font-normal text-ink-soft">(optional)</span>
-              <input className={input} value={draft.name} onChange={set("name")} maxLength={120} autoComplete="off" />
+              <input className={FIELD_INPUT} value={draft.name} onChange={set("name")} maxLength={120} autoComplete="off" />
             </label>
           </>
         ) : null}

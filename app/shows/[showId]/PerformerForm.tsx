@@ -6,9 +6,9 @@ import { Button } from "@/components/Button";
 import { errorText } from "@/components/error-text";
 import { sendJson } from "@/components/fetcher";
 import { FormMessage } from "@/components/FormMessage";
+import { FIELD_INPUT } from "@/components/form-styles";
 import { INSTRUMENT_OPTIONS, instrumentName } from "./instrument-options";
 
-const input = "mt-1 block min-h-11 w-full rounded-lg border border-ink/30 bg-paper-raised px-2";
 
 export function PerformerForm(props: { showId: string; performer: Performer; onDone(message: string): void; onCancel(): void }) {
   const p = props.performer;
@@ -53,30 +53,30 @@ export function PerformerForm(props: { showId: string; performer: Performer; onD
       <div className="grid gap-3 sm:grid-cols-3">
         <label className="text-sm font-semibold">
           Label
-          <input className={input} value={draft.label} onChange={set("label")} maxLength={16} required />
+          <input className={FIELD_INPUT} value={draft.label} onChange={set("label")} maxLength={16} required />
         </label>
         <label className="text-sm font-semibold">
           Instrument
-          <select className={input} value={draft.instrument} onChange={set("instrument")}>
+          <select className={FIELD_INPUT} value={draft.instrument} onChange={set("instrument")}>
             {INSTRUMENT_OPTIONS.some((o) => o.key === draft.instrument) ? null : <option value={draft.instrument}>{instrumentName(draft.instrument)}</option>}
             {INSTRUMENT_OPTIONS.map((o) => <option key={o.key} value={o.key}>{o.name}</option>)}
           </select>
         </label>
         <label className="text-sm font-semibold">
           Section
-          <input className={input} value={draft.section} onChange={set("section")} list="roster-sections" maxLength={60} required />
+          <input className={FIELD_INPUT} value={draft.section} onChange={set("section")} list="roster-sections" maxLength={60} required />
         </label>
         <label className="text-sm font-semibold">
           Part <span className="font-normal text-ink-soft">(optional)</span>
-          <input className={input} value={draft.part} onChange={set("part")} maxLength={40} placeholder="e.g. 2nd" />
+          <input className={FIELD_INPUT} value={draft.part} onChange={set("part")} maxLength={40} placeholder="e.g. 2nd" />
         </label>
         <label className="text-sm font-semibold">
           Strength in dB <span className="font-normal text-ink-soft">(−6 weak to +6 strong)</span>
-          <input className={input} value={draft.strengthDb} onChange={set("strengthDb")} inputMode="decimal" type="number" min={-6} max={6} step={0.5} />
+          <input className={FIELD_INPUT} value={draft.strengthDb} onChange={set("strengthDb")} inputMode="decimal" type="number" min={-6} max={6} step={0.5} />
         </label>
         <label className="text-sm font-semibold">
           Name <span className="font-normal text-ink-soft">(optional)</span>
-          <input className={input} value={draft.name} onChange={set("name")} maxLength={120} autoComplete="off" />
+          <input className={FIELD_INPUT} value={draft.name} onChange={set("name")} maxLength={120} autoComplete="off" />
         </label>
       </div>
       <div className="flex flex-wrap items-center gap-2">

@@ -5,9 +5,9 @@ import { Button } from "@/components/Button";
 import { errorText } from "@/components/error-text";
 import { sendJson } from "@/components/fetcher";
 import { FormMessage } from "@/components/FormMessage";
+import { FIELD_INPUT } from "@/components/form-styles";
 import type { MusicPhrase, MusicResponse } from "./music-types";
 
-const input = "mt-1 block min-h-11 w-full rounded-lg border border-ink/30 bg-paper-raised px-2";
 
 type Props = {
   showId: string;
@@ -68,12 +68,12 @@ export function PhraseForm({ showId, sets, phrase, suggestedFirstSetId, onDone, 
       <div className="grid gap-3 sm:grid-cols-3">
         <label className="text-sm font-semibold">
           Name
-          <input className={input} value={draft.name} maxLength={120} placeholder="e.g. Opener hit" onChange={(e) => setDraft((d) => ({ ...d, name: e.target.value }))} />
+          <input className={FIELD_INPUT} value={draft.name} maxLength={120} placeholder="e.g. Opener hit" onChange={(e) => setDraft((d) => ({ ...d, name: e.target.value }))} />
         </label>
         <label className="text-sm font-semibold">
           From
           <select
-            className={input}
+            className={FIELD_INPUT}
             value={draft.firstSetId}
             onChange={(e) => {
               const firstSetId = e.target.value;
@@ -85,7 +85,7 @@ export function PhraseForm({ showId, sets, phrase, suggestedFirstSetId, onDone, 
         </label>
         <label className="text-sm font-semibold">
           To
-          <select className={input} value={draft.lastSetId} onChange={(e) => setDraft((d) => ({ ...d, lastSetId: e.target.value }))}>
+          <select className={FIELD_INPUT} value={draft.lastSetId} onChange={(e) => setDraft((d) => ({ ...d, lastSetId: e.target.value }))}>
             {setOptions}
           </select>
         </label>

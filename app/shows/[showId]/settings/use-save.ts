@@ -2,6 +2,7 @@
 // One form's save: busy while sending, then a message in words (the API's own on a refusal), and the show re-read.
 import { useState } from "react";
 import { mutate } from "swr";
+import { errorText } from "@/components/error-text";
 import { ApiError } from "@/components/fetcher";
 import { apiKeys } from "@/components/use-api";
 
@@ -18,9 +19,9 @@ export function useSave(showId: string) {
       return true;
     } catch (err) {
       const issues = err instanceof ApiError ? err.issues : undefined;
-      const detail = issues ? Object.values(issues).flat().join(" ") : "";
       // Field errors say what is wrong better than the body's summary ("The request body is not valid.").
-      setMessage({ tone: "bad", text: detail ? `Not saved: ${detail}` : err instanceof Error ? err.message : "That did not work.", issues });
+      const text = errorText(err, "That did not work.");
+      setMessage({ tone: "bad", text: issues && Object.keys(issues).length ? `Not saved: ${text}` : text, issues });
       return false;
     } finally {
       setBusy(false);

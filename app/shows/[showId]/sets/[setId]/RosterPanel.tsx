@@ -2,7 +2,7 @@
 import { useState } from "react";
 import type { Performer } from "@/components/api-types";
 import { humanize } from "@/components/format";
-import { DEFAULT_INSTRUMENTS } from "@/lib/acoustics/catalog";
+import { INSTRUMENT_OPTIONS } from "../../instrument-options";
 
 export function RosterPanel(props: {
   unplaced: Performer[];
@@ -58,9 +58,9 @@ export function RosterPanel(props: {
           <label className="text-sm">
             <span className="block text-ink-soft">Add by instrument</span>
             <select value={instrument} onChange={(e) => setInstrument(e.target.value)} className="min-h-9 rounded-md border border-ink/20 bg-paper-raised px-2">
-              {Object.entries(DEFAULT_INSTRUMENTS).map(([key, spec]) => (
-                <option key={key} value={key}>
-                  {spec.name}
+              {INSTRUMENT_OPTIONS.map((o) => (
+                <option key={o.key} value={o.key}>
+                  {o.name}
                 </option>
               ))}
             </select>
