@@ -171,7 +171,7 @@ function wideFormEdges(players: BoxPlayer[], t: BalanceTargets): CheckResult {
 }
 
 /** The median of `sorted` (ascending) without its element at index `skip`. */
-function medianWithout(sorted: readonly number[], skip: number): number {
+export function medianWithout(sorted: readonly number[], skip: number): number {
   const n = sorted.length - 1;
   const at = (r: number) => sorted[r < skip ? r : r + 1]!;
   return n % 2 ? at(n >> 1) : (at(n / 2 - 1) + at(n / 2)) / 2;
