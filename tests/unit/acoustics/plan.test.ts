@@ -12,7 +12,7 @@ import {
   type Dynamic,
   type PerformerInput,
 } from "@/lib/acoustics";
-import { AIR, BOX, facingToward, performer } from "./helpers";
+import { AIR, BOX, facingToward, lazy, performer } from "./helpers";
 
 const input = (performers: PerformerInput[]): AnalysisInput => ({ performers, listeningPoints: [BOX], conditions: AIR });
 const box = (i: AnalysisInput) => analyzeSet(i).points[0]!;
@@ -30,12 +30,17 @@ describe("planBalance: one section that must rise by a computable amount", () =>
     ...[-4, -2, 0, 2, 4].map((x, k) => at({ id: `C${k}`, x, y: 30, instrument: "clarinet", section: "clarinets", voice: "melody", dynamic: "pp" })),
     performer({ id: "T1", x: 0, y: 34, voice: "accompaniment", dynamic: "pp", facingDeg: 180 }),
   ];
-  const before = box(input(band));
-  const needed = 3 - (before.voices.melody!.dbA - before.voices.accompaniment!.dbA);
-  const riseAt = (d: Dynamic) => box(input(withDynamic(band, "clarinets", d))).sections.clarinets!.dbA - before.sections.clarinets!.dbA;
-  const expected = DYNAMICS.find((d) => riseAt(d) >= needed)!;
+  // Computed inside the tests (lazy), never while vitest collects the file: see helpers.ts.
+  const case_ = lazy(() => {
+    const before = box(input(band));
+    const needed = 3 - (before.voices.melody!.dbA - before.voices.accompaniment!.dbA);
+    const riseAt = (d: Dynamic) => box(input(withDynamic(band, "clarinets", d))).sections.clarinets!.dbA - before.sections.clarinets!.dbA;
+    const expected = DYNAMICS.find((d) => riseAt(d) >= needed)!;
+    return { before, needed, riseAt, expected };
+  });
 
   it("raises the melody section to the softest dynamic that gives the lead, and no further", () => {
+    const { needed, riseAt, expected } = case_();
     expect(needed).toBeGreaterThan(0);
     expect(expected).not.toBe("pp");
     // The case is not on a knife edge: the step below misses by more than the solver's tolerance.
@@ -48,6 +53,7 @@ describe("planBalance: one section that must rise by a computable amount", () =>
   });
 
   it("changes the mix as predicted: applying the plan moves the section by changeDb and the melody passes", () => {
+    const { before } = case_();
     const plan = planBalance(input(band), BOX.id);
     const applied = applyPlan(input(band), plan);
     const after = box(applied);
