@@ -20,7 +20,8 @@ export const WIND_FAMILIES: readonly Family[] = ["woodwind", "brass"];
 export const BATTERY_FAMILIES: readonly Family[] = ["percussion"];
 /** depth-support: an instrument's nearer and farther players are compared only when their mean distances differ by this (m, 10 yd; common practice, no source). */
 export const DEPTH_MIN_SPAN_M = 10 * 0.9144;
-const FAMILY_NAMES: Record<Family, string> = { woodwind: "woodwinds", brass: "brass", percussion: "percussion", keyboard: "keyboards", amplified: "amplified" };
+/** The choirs' names in the pyramid's words (only PYRAMID_FAMILIES are named). */
+const CHOIR_NAMES: Partial<Record<Family, string>> = { woodwind: "woodwinds", brass: "brass" };
 
 const ids = (players: readonly BoxPlayer[]) => players.map((p) => p.id);
 const sectionsOf = (players: readonly BoxPlayer[]) => [...new Set(players.map((p) => p.section))].join(", ");
@@ -73,10 +74,10 @@ function batteryBalance(players: BoxPlayer[], t: BalanceTargets): CheckResult {
 function bassUpPyramid(players: BoxPlayer[], t: BalanceTargets): CheckResult {
   const failures: string[] = [];
   const flagged = new Set<string>();
-  let pairs = 0;
+  let judged = false;
   const harmony = players.filter((p) => PYRAMID_FAMILIES.includes(p.family) && (t.pyramidVoices as string[]).includes(p.voice));
   const check = (scope: string, low: { register: Register; list: BoxPlayer[]; phon: number }, high: { register: Register; list: BoxPlayer[]; phon: number }) => {
-    pairs++;
+    judged = true;
     const deficit = high.phon - low.phon;
     if (deficit > t.pyramidToleranceDb) {
       failures.push(`${scope}, the ${low.register} register (${sectionsOf(low.list)}) is ${formatDb(deficit)} under the ${high.register} (${sectionsOf(high.list)})`);
@@ -90,13 +91,13 @@ function bassUpPyramid(players: BoxPlayer[], t: BalanceTargets): CheckResult {
   // Within a choir, each register against the next one up that plays: every layer carries the one above.
   for (const family of PYRAMID_FAMILIES) {
     const present = registers(harmony.filter((p) => p.family === family));
-    for (let i = 0; i + 1 < present.length; i++) check(`in the ${FAMILY_NAMES[family]}`, present[i]!, present[i + 1]!);
+    for (let i = 0; i + 1 < present.length; i++) check(`in the ${CHOIR_NAMES[family]}`, present[i]!, present[i + 1]!);
   }
   // Across the band, the bass register carries every register above it.
   // Across the band only where both choirs play the harmony (else it is the one choir again).
   const band = new Set(harmony.map((p) => p.family)).size > 1 ? registers(harmony) : [];
   if (band[0]?.register === "bass") for (const high of band.slice(1)) check("across the band", band[0], high);
-  if (pairs === 0) return notApplicable("bass-up-pyramid", "No two registers of winds play the harmony here.");
+  if (!judged) return notApplicable("bass-up-pyramid", "No two registers of winds play the harmony here.");
   if (failures.length === 0) {
     return pass("bass-up-pyramid", `Every lower register is at least as loud as the higher ones, in each choir and across the band (tolerance ${formatDb(t.pyramidToleranceDb)}).`);
   }
@@ -112,7 +113,7 @@ function bassUpPyramid(players: BoxPlayer[], t: BalanceTargets): CheckResult {
 function depthSupport(players: BoxPlayer[], t: BalanceTargets): CheckResult {
   const failures: string[] = [];
   const flagged: string[] = [];
-  let compared = 0;
+  let compared = false;
   for (const list of groupBy(players.filter(isWind), (p) => `${p.instrument}\u0000${p.dynamic}`).values()) {
     if (list.length < 2) continue;
     const sorted = [...list].sort((a, b) => a.distanceM - b.distanceM);
@@ -123,7 +124,7 @@ function depthSupport(players: BoxPlayer[], t: BalanceTargets): CheckResult {
     const dNear = meanDistance(near);
     const dFar = meanDistance(far);
     if (dFar - dNear < DEPTH_MIN_SPAN_M) continue;
-    compared++;
+    compared = true;
     const explained = 20 * Math.log10(dFar / dNear);
     const excess = phon(near, true) - phon(far, true) - explained;
     if (excess > t.depthToleranceDb) {
@@ -131,7 +132,7 @@ function depthSupport(players: BoxPlayer[], t: BalanceTargets): CheckResult {
       flagged.push(...ids(far));
     }
   }
-  if (compared === 0) return notApplicable("depth-support", `No instrument has players at depths more than ${(DEPTH_MIN_SPAN_M / 0.9144).toFixed(0)} yd apart from the listening point.`);
+  if (!compared) return notApplicable("depth-support", `No instrument has players at depths more than ${(DEPTH_MIN_SPAN_M / 0.9144).toFixed(0)} yd apart from the listening point.`);
   if (failures.length === 0) {
     return pass("depth-support", `Farther players are supported: none is thinner than distance explains by more than ${formatDb(t.depthToleranceDb)}.`);
   }
@@ -153,19 +154,19 @@ function wideFormEdges(players: BoxPlayer[], t: BalanceTargets): CheckResult {
   const mid = (minX + maxX) / 2;
   const failures: string[] = [];
   const flagged: string[] = [];
-  let compared = 0;
+  let compared = false;
   for (const [section, list] of groupBy(winds, (p) => `${p.section}\u0000${p.instrument}`)) {
     const centre = list.filter((p) => Math.abs(p.x - mid) <= sixth);
     const ends = list.filter((p) => p.x <= minX + sixth || p.x >= maxX - sixth);
     if (centre.length === 0 || ends.length === 0) continue;
-    compared++;
+    compared = true;
     const excess = phon(ends, true) - phon(centre, true);
     if (excess > t.edgeToleranceDb) {
       failures.push(`the ${plural(ends.length, "player")} of the ${section.split("\u0000")[0]} at the ends are ${formatDb(excess)} louder each than their section's centre`);
       flagged.push(...ids(ends));
     }
   }
-  if (compared === 0) return notApplicable("wide-form-edges", `The form spans ${yards(width)}, but no section stands both at its ends and at its centre.`);
+  if (!compared) return notApplicable("wide-form-edges", `The form spans ${yards(width)}, but no section stands both at its ends and at its centre.`);
   if (failures.length === 0) return pass("wide-form-edges", `The form spans ${yards(width)}; no section's end players are louder than its centre by more than ${formatDb(t.edgeToleranceDb)}.`);
   return fail("wide-form-edges", `The form spans ${yards(width)}: ${failures.join("; ")} (tolerance ${formatDb(t.edgeToleranceDb)}). The end players should back off.`, flagged);
 }
@@ -183,10 +184,10 @@ export function medianWithout(sorted: readonly number[], skip: number): number {
  */
 function standOuts(players: BoxPlayer[], t: BalanceTargets): CheckResult {
   const flagged: { id: string; section: string; excess: number }[] = [];
-  let compared = 0;
+  let compared = false;
   for (const list of groupBy(players.filter((p) => !p.solo), (p) => `${p.section}\u0000${p.voice}\u0000${p.instrument}`).values()) {
     if (list.length < 2) continue;
-    compared++;
+    compared = true;
     const levels = list.map((p) => phon([p]));
     const sorted = [...levels].sort((a, b) => a - b);
     list.forEach((p, i) => {
@@ -194,7 +195,7 @@ function standOuts(players: BoxPlayer[], t: BalanceTargets): CheckResult {
       if (excess > t.standOutDb) flagged.push({ id: p.id, section: p.section, excess });
     });
   }
-  if (compared === 0) return notApplicable("stand-outs", "No section has two players on one voice here.");
+  if (!compared) return notApplicable("stand-outs", "No section has two players on one voice here.");
   if (flagged.length === 0) return pass("stand-outs", `No player is more than ${formatDb(t.standOutDb)} above the rest of their section's voice in loudness.`);
   flagged.sort((a, b) => b.excess - a.excess);
   const words = [...groupBy(flagged, (f) => f.section)].map(([section, list]) => `${plural(list.length, "player")} of the ${section} up to ${formatDb(list[0]!.excess)}`);
