@@ -4,6 +4,8 @@
 //                  and audibility per voice; the box with a stadium background)
 //   showSweepMs    100 sets × 16 counts of the same band (an evaluator per set, every count evaluated)
 //   kernelRatio    the evaluator's time over a bare Float64Array loop doing the same arithmetic
+//   confidenceMs   median checkConfidence of that set at the box (each sounding instrument one uncertainty
+//                  louder and softer, every check rerun), the largest part of a stored analysis
 import { BAND_COUNT, OCTAVE_BANDS } from "../lib/acoustics/bands";
 import { absorptionDbPerKmUnchecked, speedOfSound } from "../lib/acoustics/atmosphere";
 import { DEFAULT_INSTRUMENTS } from "../lib/acoustics/catalog";
@@ -11,7 +13,8 @@ import { compileDirectivity } from "../lib/acoustics/directivity";
 import { GROUND_TERM_COUNT, regionTermsInto } from "../lib/acoustics/ground";
 import { instrumentBandsInto } from "../lib/acoustics/instrument";
 import { aWeightingDb } from "../lib/acoustics/weighting";
-import { analyzeSet, createSetEvaluator, positionsBetweenInto, DYNAMICS, VOICES, type AnalysisInput, type PerformerInput } from "../lib/acoustics";
+import { checkConfidence } from "../lib/acoustics/confidence";
+import { analyzeSet, checkBalance, createSetEvaluator, positionsBetweenInto, DYNAMICS, VOICES, type AnalysisInput, type PerformerInput } from "../lib/acoustics";
 
 const PERFORMERS = 300;
 const SETS = 100;
@@ -69,6 +72,12 @@ function time(fn: () => void, samples: number, batch: number): number {
 const input0 = setInput(0);
 let sink = 0;
 const setAnalysisMs = time(() => (sink += analyzeSet(input0).points[0].totalDbA), 101, 5);
+
+// 1b. How sure the box's checks are (lib/acoustics/confidence.ts), given the set's analysis and checks.
+const boxInput = { ...input0, listeningPoints: [input0.listeningPoints[0]] };
+const boxPoint = analyzeSet(boxInput).points[0];
+const boxChecks = checkBalance(boxInput, boxPoint);
+const confidenceMs = time(() => (sink += checkConfidence(boxInput, "box", null, { point: boxPoint, checks: boxChecks }).length), 21, 1);
 
 // 2. The show sweep: an evaluator per set, positions moved count by count.
 const inputs = Array.from({ length: SETS }, (_, s) => setInput(s));
@@ -233,6 +242,7 @@ if (!(agreeDb < 1e-9)) throw new Error(`bare kernel and engine disagree by ${agr
 const round = (v: number, d = 4) => Math.round(v * 10 ** d) / 10 ** d;
 console.log(`Acoustic engine benchmark: ${PERFORMERS} performers, ${BAND_COUNT} bands, ${N} listening points (Node ${process.version})`);
 console.log(`  analyzeSet (validate, precompute, evaluate, build result, loudness): median ${round(setAnalysisMs, 3)} ms   target < 1 ms`);
+console.log(`  checkConfidence at the box (every sounding instrument ± its uncertainty): median ${round(confidenceMs, 2)} ms`);
 console.log(`  show sweep, ${SETS} sets × ${COUNTS} counts (${SETS * COUNTS} evaluations):   ${round(showSweepMs, 1)} ms   target < 500 ms`);
 console.log(`  evaluate() alone: median ${round(evaluateMs, 4)} ms; bare Float64Array loop: ${round(kernelMs, 4)} ms`);
 console.log(`  kernel ratio (engine / bare loop): ${round(kernelRatio, 3)}   target < 1.5   (totals agree within ${agreeDb.toExponential(1)} dB)`);
@@ -240,6 +250,7 @@ if (!Number.isFinite(sink)) console.log("  (sink)");
 console.log(
   JSON.stringify({
     setAnalysisMs: round(setAnalysisMs),
+    confidenceMs: round(confidenceMs, 2),
     showSweepMs: round(showSweepMs, 2),
     kernelRatio: round(kernelRatio, 3),
     evaluateMs: round(evaluateMs),

@@ -2,6 +2,7 @@
 // ground of the balance checks and the balance plan.
 import { DEFAULT_INSTRUMENTS } from "./catalog";
 import { AcousticsInputError } from "./errors";
+import { bandEnergies } from "./group-loudness";
 import { sumLevelsDb } from "./levels";
 import { DEFAULT_SOURCE_HEIGHT_M } from "./validate";
 import type { AnalysisInput, Dynamic, Family, InstrumentCatalog, InstrumentSpec, PerformerInput, PointResult, Register, VoiceOrTacet } from "./types";
@@ -30,6 +31,8 @@ export interface BoxPlayer {
   dbA: number;
   /** Unweighted band levels at the listening point (dB). */
   bandsDb: number[];
+  /** Their energies, 10^(L/10) per band: computed once for every loudness sum the player is part of. */
+  bandsE: Float64Array;
   arrivalMs: number;
 }
 
@@ -61,6 +64,7 @@ export function soundingPlayers(input: AnalysisInput, point: PointResult): BoxPl
         solo: perf.solo === true,
         dbA: res.dbA,
         bandsDb: res.bandsDb,
+        bandsE: bandEnergies(res.bandsDb),
         arrivalMs: res.arrivalMs,
       },
     ];

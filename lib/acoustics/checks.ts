@@ -4,7 +4,7 @@
 // "not applicable" (status), never a pass. Thresholds and their sources are in targets.ts.
 import { backgroundThirdOctaves } from "./background";
 import { formatDb, groupBy, soundingPlayers, type BoxPlayer } from "./box-players";
-import { groupLoudness } from "./group-loudness";
+import { groupLoudness, type GroupLoudnessOf } from "./group-loudness";
 import { noiseLikeVoiceBands } from "./analyze";
 import { pointLoudness, type PointLoudness } from "./point-loudness";
 import { resolveTargets, type BalanceTargets } from "./targets";
@@ -27,14 +27,16 @@ const ids = (players: readonly BoxPlayer[]) => players.map((p) => p.id);
 const sectionsOf = (players: readonly BoxPlayer[]) => [...new Set(players.map((p) => p.section))].join(", ");
 const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 const isWind = (p: BoxPlayer) => WIND_FAMILIES.includes(p.family);
-const phon = (players: readonly BoxPlayer[], perPlayer = false) => groupLoudness(players, perPlayer).phon;
+
+/** Loudness level (phon) of a group of players, or of its average player. */
+type Phon = (players: readonly BoxPlayer[], perPlayer?: boolean) => number;
 
 const pass = (id: CheckId, detail: string): CheckResult => ({ id, passed: true, status: "pass", applicable: true, detail, performerIds: [] });
 const fail = (id: CheckId, detail: string, performerIds: string[]): CheckResult => ({ id, passed: false, status: "fail", applicable: true, detail, performerIds });
 const notApplicable = (id: CheckId, detail: string): CheckResult => ({ id, passed: true, status: "not-applicable", applicable: false, detail, performerIds: [] });
 
 /** melody-forward: the melody's loudness leads every other voice's winds by targets.melodyLeadDb. */
-function melodyForward(players: BoxPlayer[], t: BalanceTargets): CheckResult {
+function melodyForward(players: BoxPlayer[], t: BalanceTargets, phon: Phon): CheckResult {
   const melody = players.filter((p) => p.voice === "melody");
   if (melody.length === 0) return notApplicable("melody-forward", "No one plays the melody in this set.");
   const m = phon(melody);
@@ -57,7 +59,7 @@ function melodyForward(players: BoxPlayer[], t: BalanceTargets): CheckResult {
 }
 
 /** battery-balance: the battery's loudness stays within targets.batteryOverWindsDb of the winds'. */
-function batteryBalance(players: BoxPlayer[], t: BalanceTargets): CheckResult {
+function batteryBalance(players: BoxPlayer[], t: BalanceTargets, phon: Phon): CheckResult {
   const battery = players.filter((p) => BATTERY_FAMILIES.includes(p.family));
   const winds = players.filter(isWind);
   if (battery.length === 0) return notApplicable("battery-balance", "The battery does not play in this set.");
@@ -71,7 +73,7 @@ function batteryBalance(players: BoxPlayer[], t: BalanceTargets): CheckResult {
 }
 
 /** bass-up-pyramid: in each choir every register of the harmony is at least as loud as the next one up, and across the band the bass register as loud as each above it. */
-function bassUpPyramid(players: BoxPlayer[], t: BalanceTargets): CheckResult {
+function bassUpPyramid(players: BoxPlayer[], t: BalanceTargets, phon: Phon): CheckResult {
   const failures: string[] = [];
   const flagged = new Set<string>();
   let judged = false;
@@ -110,7 +112,7 @@ function bassUpPyramid(players: BoxPlayer[], t: BalanceTargets): CheckResult {
  * player for player; the farther ones may be softer by what distance explains (20·lg of the distance
  * ratio) plus the tolerance, not more.
  */
-function depthSupport(players: BoxPlayer[], t: BalanceTargets): CheckResult {
+function depthSupport(players: BoxPlayer[], t: BalanceTargets, phon: Phon): CheckResult {
   const failures: string[] = [];
   const flagged: string[] = [];
   let compared = false;
@@ -140,7 +142,7 @@ function depthSupport(players: BoxPlayer[], t: BalanceTargets): CheckResult {
 }
 
 /** wide-form-edges: in a wind form wider than the threshold, each section's players at the ends are not louder per player than its own players at the centre. */
-function wideFormEdges(players: BoxPlayer[], t: BalanceTargets): CheckResult {
+function wideFormEdges(players: BoxPlayer[], t: BalanceTargets, phon: Phon): CheckResult {
   const winds = players.filter(isWind);
   const yards = (m: number) => `${(m / 0.9144).toFixed(0)} yd`;
   if (winds.length < 3) return notApplicable("wide-form-edges", "Too few winds play to make a form.");
@@ -182,7 +184,7 @@ export function medianWithout(sorted: readonly number[], skip: number): number {
  * stand-outs: no player far above the median of the rest of its section playing the same voice on the
  * same instrument. A solo (alone on its voice in the section, or a part marked solo) is never one.
  */
-function standOuts(players: BoxPlayer[], t: BalanceTargets): CheckResult {
+function standOuts(players: BoxPlayer[], t: BalanceTargets, phon: Phon): CheckResult {
   const flagged: { id: string; section: string; excess: number }[] = [];
   let compared = false;
   for (const list of groupBy(players.filter((p) => !p.solo), (p) => `${p.section}\u0000${p.voice}\u0000${p.instrument}`).values()) {
@@ -253,16 +255,30 @@ function loudnessAt(input: AnalysisInput, point: PointResult): PointLoudness {
  * `input` is analyzeSet's input, `point` one entry of its result's points.
  */
 export function checkBalance(input: AnalysisInput, point: PointResult, targets?: Partial<BalanceTargets> | null): CheckResult[] {
+  return checkPlayers(soundingPlayers(input, point), loudnessAt(input, point), targets);
+}
+
+/**
+ * The balance checks of the sounding players at a point and the point's loudness (checkBalance's
+ * work once those are known). `loudnessOf` computes a group's loudness: groupLoudness, or a
+ * memoGroupLoudness shared by rounds over mostly the same players.
+ */
+export function checkPlayers(
+  players: BoxPlayer[],
+  loudness: PointLoudness,
+  targets?: Partial<BalanceTargets> | null,
+  loudnessOf: GroupLoudnessOf = groupLoudness,
+): CheckResult[] {
   const t = resolveTargets(targets);
-  const players = soundingPlayers(input, point);
+  const phon: Phon = (list, perPlayer = false) => loudnessOf(list, perPlayer).phon;
   return [
-    melodyForward(players, t),
-    bassUpPyramid(players, t),
-    depthSupport(players, t),
-    wideFormEdges(players, t),
-    standOuts(players, t),
+    melodyForward(players, t, phon),
+    bassUpPyramid(players, t, phon),
+    depthSupport(players, t, phon),
+    wideFormEdges(players, t, phon),
+    standOuts(players, t, phon),
     arrivalSpread(players, t),
-    batteryBalance(players, t),
-    heardAtBox(players, loudnessAt(input, point), t),
+    batteryBalance(players, t, phon),
+    heardAtBox(players, loudness, t),
   ];
 }

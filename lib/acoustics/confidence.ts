@@ -5,10 +5,14 @@
 // propagation of independent errors, GUM JCGM 100:2008 §5.1.2, eq. 10, with ∂L/∂δk = Ek/E).
 // Checks: the likely cases are the catalog as it is and each sounding instrument alone one
 // uncertainty louder or softer; a check whose verdict is the same in all of them is "clear",
-// otherwise "borderline", naming the instruments that turn it.
+// otherwise "borderline", naming the instruments that turn it. A case shifts that instrument's
+// players at the point rather than evaluating the set again (instrument-shift.ts).
 import { catalogOf, soundingPlayers, type BoxPlayer } from "./box-players";
-import { checkBalance } from "./checks";
+import { backgroundThirdOctaves } from "./background";
+import { checkBalance, checkPlayers } from "./checks";
 import { createSetEvaluator } from "./evaluator";
+import { memoGroupLoudness } from "./group-loudness";
+import { playersLoudness, shiftInstrument } from "./instrument-shift";
 import { instrumentProvenance, shownPrecisionDb } from "./provenance";
 import type { BalanceTargets } from "./targets";
 import type { AnalysisInput, CheckId, CheckResult, PointResult } from "./types";
@@ -82,15 +86,20 @@ export function checkConfidence(
   };
   const base = nominal ?? run(one);
   const catalog = catalogOf(input);
-  const sounding = [...new Set(soundingPlayers(one, base.point).map((p) => p.instrument))].sort();
+  const players = soundingPlayers(one, base.point);
+  const background = backgroundThirdOctaves(point.background);
+  // Most groups the checks weigh hold none of the shifted instrument: each is computed once for all cases.
+  const loudnessOf = memoGroupLoudness();
+  const sounding = [...new Set(players.map((p) => p.instrument))].sort();
   const out = base.checks.map((c) => ({ id: c.id, confidence: "clear" as Confidence, cases: 1, sameInCases: 1, turnedBy: [] as CheckConfidence["turnedBy"] }));
   for (const key of sounding) {
     const spec = catalog[key]!;
     const u = instrumentProvenance(spec).uncertaintyDb;
     if (!(u > 0)) continue;
     for (const shiftDb of [u, -u]) {
-      const shifted = run({ ...one, instruments: { ...(input.instruments ?? {}), [key]: { ...spec, carryDb: spec.carryDb + shiftDb } } });
-      shifted.checks.forEach((c, n) => {
+      // The same as evaluating with the instrument's carryDb moved by shiftDb (instrument-shift.ts).
+      const shifted = shiftInstrument(players, key, shiftDb);
+      checkPlayers(shifted, playersLoudness(shifted, background), targets, loudnessOf).forEach((c, n) => {
         const o = out[n]!;
         o.cases += 1;
         if (c.passed === base.checks[n]!.passed) o.sameInCases += 1;
