@@ -1,8 +1,8 @@
 // analyzeSet: the box mix of one set at every listening point.
-import { backgroundThirdOctaves } from "./background";
+import { backgroundThirdOctaves, type Background } from "./background";
 import { catalogOf } from "./box-players";
 import { createSetEvaluator } from "./evaluator";
-import { pointLoudness } from "./point-loudness";
+import { pointLoudness, type PointLoudness } from "./point-loudness";
 import type { AnalysisInput, AnalysisResult, PointResult } from "./types";
 
 /** Families whose sound masks as noise rather than as tones (audibility.ts): the battery's drums and cymbals. */
@@ -22,6 +22,13 @@ export function noiseLikeVoiceBands(input: AnalysisInput, point: PointResult): R
   return Object.fromEntries(Object.entries(energy).map(([voice, e]) => [voice, e.map((x) => 10 * Math.log10(x))]));
 }
 
+/** The loudness at a point (ISO 532-1, point-loudness.ts) of its voices' levels over the point's background. */
+export function loudnessOfPoint(input: AnalysisInput, point: PointResult, background: Background | null | undefined): PointLoudness {
+  const voiceBands: Record<string, number[]> = {};
+  for (const [voice, level] of Object.entries(point.voices)) if (level) voiceBands[voice] = level.bandsDb;
+  return pointLoudness(voiceBands, backgroundThirdOctaves(background), "free", noiseLikeVoiceBands(input, point));
+}
+
 /**
  * Predicted levels of every performer, section, voice and the whole band at each listening
  * point, per octave band and A-weighted, with arrival times, and the loudness of the band and of
@@ -35,9 +42,7 @@ export function analyzeSet(input: AnalysisInput): AnalysisResult {
   evaluator.evaluate();
   const result = evaluator.result();
   result.points.forEach((point, n) => {
-    const voiceBands: Record<string, number[]> = {};
-    for (const [voice, level] of Object.entries(point.voices)) if (level) voiceBands[voice] = level.bandsDb;
-    point.loudness = pointLoudness(voiceBands, backgroundThirdOctaves(input.listeningPoints[n].background), "free", noiseLikeVoiceBands(input, point));
+    point.loudness = loudnessOfPoint(input, point, input.listeningPoints[n].background);
   });
   return result;
 }

@@ -2,11 +2,10 @@
 // point, judged on perceived loudness (ISO 532-1 loudness levels in phon, group-loudness.ts) and on
 // audibility over the rest and the background (audibility.ts). A check with nothing to judge says
 // "not applicable" (status), never a pass. Thresholds and their sources are in targets.ts.
-import { backgroundThirdOctaves } from "./background";
 import { formatDb, groupBy, soundingPlayers, type BoxPlayer } from "./box-players";
 import { groupLoudness, type GroupLoudnessOf } from "./group-loudness";
-import { noiseLikeVoiceBands } from "./analyze";
-import { pointLoudness, type PointLoudness } from "./point-loudness";
+import { loudnessOfPoint } from "./analyze";
+import type { PointLoudness } from "./point-loudness";
 import { resolveTargets, type BalanceTargets } from "./targets";
 import { VOICES, type AnalysisInput, type CheckId, type CheckResult, type Family, type PointResult, type Register } from "./types";
 
@@ -243,11 +242,9 @@ function heardAtBox(players: BoxPlayer[], loudness: PointLoudness, t: BalanceTar
 
 /** The point's loudness: the analysis's, or computed here (sweeps evaluate levels only). */
 function loudnessAt(input: AnalysisInput, point: PointResult): PointLoudness {
+  // Stryker disable next-line ConditionalExpression: recomputing gives the analysis's own loudness (the same loudnessOfPoint); the branch only saves the work
   if (point.loudness) return point.loudness;
-  const voiceBands: Record<string, number[]> = {};
-  for (const [voice, level] of Object.entries(point.voices)) if (level) voiceBands[voice] = level.bandsDb;
-  const lp = input.listeningPoints.find((p) => p.id === point.listeningPointId);
-  return pointLoudness(voiceBands, backgroundThirdOctaves(lp?.background), "free", noiseLikeVoiceBands(input, point));
+  return loudnessOfPoint(input, point, input.listeningPoints.find((p) => p.id === point.listeningPointId)?.background);
 }
 
 /**

@@ -71,3 +71,38 @@ describe("wide-form-edges' geometry on exact positions", () => {
     expect(check(form(25, 35), "wide-form-edges").status).toBe("not-applicable");
   });
 });
+
+describe("what each check looks at", () => {
+  it("a pass marks no one; a failure is applicable and marks its players", () => {
+    const pass = check(mirrored({ id: "T0" }, { id: "T1" }), "arrival-spread");
+    expect([pass.status, pass.applicable, pass.performerIds]).toEqual(["pass", true, []]);
+    const fail = check([at({ id: "T0", x: 0, y: 10, voice: "accompaniment" }), at({ id: "T1", x: 2, y: 10, voice: "accompaniment", strengthDb: 9 })], "stand-outs");
+    expect([fail.status, fail.passed, fail.applicable]).toEqual(["fail", false, true]);
+  });
+
+  it("bass-up-pyramid across the band starts from the bass register: with no bass, or with both choirs on the bass alone, there is nothing across the band to judge", () => {
+    // Clarinets (soprano) at ff over trombones (tenor) at pp: one register per choir, no bass.
+    const noBass = [...[0, 2].map((x, k) => at({ id: `C${k}`, x, y: 12, instrument: "clarinet", section: "clarinets", voice: "accompaniment", dynamic: "ff" })), at({ id: "L", x: 6, y: 12, instrument: "trombone", section: "trombones", voice: "accompaniment", dynamic: "pp" })];
+    expect(check(noBass, "bass-up-pyramid").status).toBe("not-applicable");
+    const basses = [at({ id: "B", x: 0, y: 12, instrument: "bari-sax", section: "bari sax", voice: "bass" }), at({ id: "U", x: 4, y: 12, instrument: "tuba", section: "tubas", voice: "bass" })];
+    expect(check(basses, "bass-up-pyramid").status).toBe("not-applicable");
+  });
+
+  it("depth-support compares an instrument's own players at one dynamic: a trumpet in front and a clarinet behind, or snares, are nothing to judge", () => {
+    const turned = (p: PerformerInput) => ({ ...p, facingDeg: 180 });
+    expect(check([at({ id: "T", x: 0, y: 2 }), turned(at({ id: "C", x: 0, y: 40, instrument: "clarinet", section: "clarinets" }))], "depth-support").status).toBe("not-applicable");
+    expect(check([at({ id: "T", x: 0, y: 2 }), turned(at({ id: "U", x: 0, y: 40, dynamic: "ff" }))], "depth-support").status).toBe("not-applicable");
+    const snares = [at({ id: "S0", x: 0, y: 2, instrument: "snare", section: "snares", voice: "percussion" }), turned(at({ id: "S1", x: 0, y: 40, instrument: "snare", section: "snares", voice: "percussion" }))];
+    expect(check(snares, "depth-support").status).toBe("not-applicable");
+  });
+
+  it("depth-support measures the span between the near and far halves' mean distances: four trumpets in two ranks 5 m apart are under 10 yd apart", () => {
+    const ranks = [-2, 2].flatMap((x, k) => [at({ id: `N${k}`, x, y: 10 }), at({ id: `F${k}`, x, y: 15 })]);
+    expect(check(ranks, "depth-support").status).toBe("not-applicable");
+  });
+
+  it("wide-form-edges counts winds only: two trumpets among a wide snare line are too few", () => {
+    const band = [at({ id: "T0", x: -25, y: 10 }), at({ id: "T1", x: 25, y: 10 }), ...[-20, -10, 0, 10, 20].map((x, k) => at({ id: `S${k}`, x, y: 14, instrument: "snare", section: "snares", voice: "percussion" }))];
+    expect(check(band, "wide-form-edges").detail).toBe("Too few winds play to make a form.");
+  });
+});
