@@ -64,7 +64,7 @@ describe("buildAnalysisInput", () => {
     assignments: [{ phraseId: "ballad", section: "trumpets", voice: "melody", writtenDynamic: "p", playedDynamic: "mp" }] as AssignmentLike[],
     overrides: [] as OverrideLike[],
   };
-  const point = { id: "box", x: 0, y: -25, z: 18, groundFactor: null, surroundingsM: null };
+  const point = { id: "box", x: 0, y: -25, z: 18, groundFactor: 0.5, surroundingsM: 20 };
   const build = (order: number, extra: Partial<Parameters<typeof buildAnalysisInput>[0]> = {}) =>
     buildAnalysisInput({
       roster,
