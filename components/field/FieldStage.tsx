@@ -13,12 +13,14 @@ import { facingVector, fieldBounds, fitView, panBy, toField, toScreen, zoomAt, t
 import { snappedOffset } from "@/lib/editor/forms";
 import { idsInRect } from "@/lib/editor/selection";
 import { FieldMarkings, type MarkedPoint } from "./FieldMarkings";
-import { haloRadius, traceShape, type Shape as SymbolShape, type VoiceStyle } from "./palette";
+import { wedgePoints } from "@/lib/field/marks";
+import { haloRadius, type VoiceStyle } from "./palette";
 
 export interface StageDot {
   id: string;
   label: string;
-  shape: SymbolShape;
+  /** How far the instrument throws its sound either side of the facing (degrees; lib/field/marks.ts). */
+  spreadDeg: number;
   style: VoiceStyle;
   x: number;
   y: number;
@@ -344,7 +346,7 @@ function visibleLabels(dots: StageDot[], v: View, selected: ReadonlySet<string>)
 
 type Ctx = Parameters<NonNullable<Konva.ShapeConfig["sceneFunc"]>>[0];
 
-/** A performer on the field: contribution halo, symbol, facing tick and (when it fits) its label. */
+/** A performer on the field: contribution halo, sound wedge toward the facing, dot and (when it fits) its label. */
 function drawDot(ctx: Ctx, d: StageDot, r: number, o: { selected: boolean; flagged: boolean; halo: number; facing: { dx: number; dy: number }; label: boolean }) {
   const c = ctx._context;
   if (o.halo > 0) {
@@ -355,11 +357,13 @@ function drawDot(ctx: Ctx, d: StageDot, r: number, o: { selected: boolean; flagg
     c.fill();
     c.globalAlpha = 1;
   }
+  drawWedge(c, d, r);
   drawSymbol(ctx, d, r, o.selected, o.flagged);
+  // Where the player faces, also for an instrument that sounds all round.
   c.beginPath();
   c.moveTo(o.facing.dx * r, o.facing.dy * r);
-  c.lineTo(o.facing.dx * (r + 6), o.facing.dy * (r + 6));
-  c.lineWidth = 2;
+  c.lineTo(o.facing.dx * (r + 4), o.facing.dy * (r + 4));
+  c.lineWidth = 1.5;
   c.lineCap = "round";
   c.strokeStyle = "#1c2430";
   c.stroke();
@@ -379,7 +383,24 @@ function drawDot(ctx: Ctx, d: StageDot, r: number, o: { selected: boolean; flagg
   }
 }
 
-/** The performer's symbol: family shape, voice colour and outline, selection ring, check marker. */
+/** The sound wedge: the voice's colour, light, out to 2.6 dot radii, as wide as the instrument throws its sound. */
+function drawWedge(c: CanvasRenderingContext2D, d: StageDot, r: number) {
+  const pts = wedgePoints(d.facingDeg, d.spreadDeg, r * 2.6);
+  c.beginPath();
+  c.moveTo(pts[0]![0], pts[0]![1]);
+  for (const [x, y] of pts.slice(1)) c.lineTo(x, y);
+  c.closePath();
+  c.globalAlpha = 0.3;
+  c.fillStyle = d.style.colour;
+  c.fill();
+  c.globalAlpha = 0.9;
+  c.lineWidth = 1;
+  c.strokeStyle = d.style.colour;
+  c.stroke();
+  c.globalAlpha = 1;
+}
+
+/** The performer's dot: voice colour and outline, selection ring, check marker. */
 function drawSymbol(ctx: Ctx, d: StageDot, r: number, selected: boolean, flagged: boolean) {
   const c = ctx._context;
   const st = d.style;
@@ -403,7 +424,8 @@ function drawSymbol(ctx: Ctx, d: StageDot, r: number, selected: boolean, flagged
     c.setLineDash([]);
     c.stroke();
   }
-  traceShape(c, d.shape, r);
+  c.beginPath();
+  c.arc(0, 0, r, 0, Math.PI * 2);
   if (st.fillAlpha > 0) {
     c.globalAlpha = st.fillAlpha;
     c.fillStyle = st.colour;
@@ -419,7 +441,8 @@ function drawSymbol(ctx: Ctx, d: StageDot, r: number, selected: boolean, flagged
   c.stroke();
   c.setLineDash([]);
   if (st.ring) {
-    traceShape(c, d.shape, r + 2.5);
+    c.beginPath();
+    c.arc(0, 0, r + 2.5, 0, Math.PI * 2);
     c.lineWidth = 1.2;
     c.strokeStyle = "#1c2430";
     c.stroke();

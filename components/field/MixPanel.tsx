@@ -4,11 +4,12 @@
 // loudness (ISO 532-1 sones) and whether each voice is heard over the rest and the background.
 // Levels are shown to whole dB unless their uncertainty is under 1 dB (most catalog values are
 // from memory, lib/acoustics/provenance.ts), with the total's ± from the stored analysis.
+import Link from "next/link";
 import type { LevelUncertainty } from "@/lib/acoustics/confidence";
 import type { PointLoudness } from "@/lib/acoustics/point-loudness";
 import { VOICES, type Voice } from "@/lib/acoustics/types";
 import { VOICE_STYLES } from "./palette";
-import { SymbolIcon } from "./SymbolIcon";
+import { MarkIcon } from "./MarkIcon";
 
 export interface MixFigures {
   totalDbA: number;
@@ -59,7 +60,7 @@ export function MixPanel({ mix, source, pointName, computedAt }: { mix: MixFigur
             ) : null}
           </p>
           {mix.uncertainty ? (
-            <p className="text-xs text-ink-soft">± is about one standard deviation from the instrument catalog&apos;s uncertainty (most values from memory; readings at the box narrow it).</p>
+            <p className="text-xs text-ink-soft">± is about one standard deviation from the instrument catalog&apos;s uncertainty (readings at the box narrow it; see <Link className="underline" href="/sources#instruments">Where the numbers come from</Link>).</p>
           ) : null}
           {mix.loudness ? (
             <p className="text-sm text-ink-soft" data-testid="mix-loudness">
@@ -77,7 +78,7 @@ export function MixPanel({ mix, source, pointName, computedAt }: { mix: MixFigur
                 <li key={v} className="text-sm" data-testid={`voice-${v}`} data-db={mix.voices[v]?.dbA ?? ""} data-heard={loud ? String(loud.heard) : ""}>
                   <div className="grid grid-cols-[8.5rem_1fr_3.2rem] items-center gap-2">
                     <span className="inline-flex items-center gap-1.5">
-                      <SymbolIcon shape="circle" style={VOICE_STYLES[v]} size={14} />
+                      <MarkIcon style={VOICE_STYLES[v]} size={14} />
                       {VOICE_STYLES[v].name}
                     </span>
                     <Bar value={mix.voices[v]?.dbA} top={mix.totalDbA} colour={VOICE_STYLES[v].colour} />

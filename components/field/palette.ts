@@ -1,7 +1,7 @@
-// How the field shows a performer: SHAPE for the instrument family, COLOUR and OUTLINE for the
-// voice, so colour is never the only cue. Colours are picked from the Okabe–Ito set, which stays
+// How the field shows a performer: a WEDGE toward the facing as wide as the instrument throws its
+// sound (lib/field/marks.ts), COLOUR and OUTLINE of the dot for the voice, so colour is never the only cue. Colours are picked from the Okabe–Ito set, which stays
 // distinct for the common colour-vision deficiencies (Okabe & Ito 2008, "Color Universal Design").
-import type { Family, VoiceOrTacet } from "@/lib/acoustics/types";
+import type { VoiceOrTacet } from "@/lib/acoustics/types";
 
 export interface VoiceStyle {
   name: string;
@@ -26,49 +26,6 @@ export const VOICE_STYLES: Record<VoiceOrTacet, VoiceStyle> = {
 };
 
 export const VOICE_ORDER: VoiceOrTacet[] = ["melody", "countermelody", "accompaniment", "bass", "percussion", "tacet"];
-
-export type Shape = "circle" | "triangle" | "square" | "diamond" | "hexagon";
-
-export const FAMILY_SHAPES: Record<Family, { shape: Shape; name: string }> = {
-  woodwind: { shape: "circle", name: "Woodwinds" },
-  brass: { shape: "triangle", name: "Brass" },
-  percussion: { shape: "square", name: "Battery" },
-  keyboard: { shape: "diamond", name: "Keyboards" },
-  amplified: { shape: "hexagon", name: "Amplified" },
-};
-
-/** Outline path of a shape of "radius" r centred on 0,0 (canvas or SVG alike). */
-export function shapePoints(shape: Shape, r: number): [number, number][] {
-  const poly = (n: number, rot: number, k = 1) =>
-    Array.from({ length: n }, (_, i) => {
-      const a = rot + (2 * Math.PI * i) / n;
-      return [r * k * Math.cos(a), r * k * Math.sin(a)] as [number, number];
-    });
-  switch (shape) {
-    case "triangle":
-      return poly(3, -Math.PI / 2, 1.2);
-    case "square":
-      return poly(4, Math.PI / 4, 1.15);
-    case "diamond":
-      return poly(4, 0, 1.25);
-    case "hexagon":
-      return poly(6, 0, 1.1);
-    default:
-      return [];
-  }
-}
-
-/** Traces a shape on a canvas context (circle as an arc). */
-export function traceShape(ctx: { beginPath(): void; arc(x: number, y: number, r: number, a: number, b: number): void; moveTo(x: number, y: number): void; lineTo(x: number, y: number): void; closePath(): void }, shape: Shape, r: number): void {
-  ctx.beginPath();
-  if (shape === "circle") ctx.arc(0, 0, r, 0, 2 * Math.PI);
-  else {
-    const pts = shapePoints(shape, r);
-    ctx.moveTo(pts[0][0], pts[0][1]);
-    for (const [x, y] of pts.slice(1)) ctx.lineTo(x, y);
-  }
-  ctx.closePath();
-}
 
 /** Halo radius (px) for a performer's level relative to the loudest one at the listening point. */
 export function haloRadius(symbolRadius: number, relDb: number | undefined): number {

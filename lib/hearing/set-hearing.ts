@@ -32,6 +32,8 @@ export async function setHearing(show: Parameters<typeof setAnalysisInput>[0], s
         playing: perf.voice !== "tacet",
         x: perf.x,
         y: perf.y,
+        facingDeg: perf.facingDeg,
+        voice: perf.voice,
         dbA: finiteOrNull(round1(p.dbA)),
         loudestSource: p.loudestSourceId ? (byId.get(p.loudestSourceId)?.label ?? null) : null,
         niosh: { dose: p.exposure.niosh.dose, limitMinutes: finiteOrNull(p.exposure.niosh.limitMinutes) },

@@ -45,16 +45,41 @@ export function fieldIssues(error: z.ZodError): Record<string, string[]> {
   return out;
 }
 
+/** "positions.0.x" → "positions 1, x": a field's place as a person counts it. */
+function fieldWords(path: string): string {
+  if (path === "(body)") return "";
+  return path
+    .split(".")
+    .map((part) => (/^\d+$/.test(part) ? String(Number(part) + 1) : part.replace(/([a-z])([A-Z])/g, "$1 $2").toLowerCase()))
+    .join(", ");
+}
+
+/** What to change, for a person: the first few field problems by name ("The form needs a change: name: …"). */
+export function validationMessage(issues: Record<string, string[]>, what = "The form"): string {
+  const parts = Object.entries(issues)
+    .slice(0, 3)
+    .map(([path, messages]) => {
+      const where = fieldWords(path);
+      return `${where ? `${where}: ` : ""}${messages[0]}`;
+    });
+  const more = Object.keys(issues).length - parts.length;
+  const end = parts.join("; ").replace(/\.$/, "");
+  return `${what} needs ${parts.length === 1 && !more ? "a change" : "changes"}: ${end}${more > 0 ? `; and ${more} more` : ""}. Change ${parts.length === 1 && !more ? "it" : "them"} and send again.`;
+}
+
 export function parseWith<T extends z.ZodType>(schema: T, value: unknown, what = "The request"): z.infer<T> {
   const result = schema.safeParse(value);
-  if (!result.success) throw badRequest(`${what} is not valid.`, fieldIssues(result.error));
+  if (!result.success) {
+    const issues = fieldIssues(result.error);
+    throw badRequest(validationMessage(issues, what), issues);
+  }
   return result.data;
 }
 
 export async function readJson<T extends z.ZodType>(req: Request, schema: T, maxBytes = MAX_JSON_BYTES): Promise<z.infer<T>> {
   const parsed = parseJsonText(await readTextLimited(req, maxBytes));
-  if (!parsed) throw badRequest("The request body is not valid JSON.");
-  return parseWith(schema, parsed.value, "The request body");
+  if (!parsed) throw badRequest("The request body is not JSON: send the form again, or check the script that sent it.");
+  return parseWith(schema, parsed.value, "The form");
 }
 
 /** The raw body, refused with 413 (and `message`) once it passes `maxBytes`, whatever Content-Length claims. */

@@ -1,7 +1,7 @@
 // One wrapper for every route handler: typed params, errors as JSON with the codes of shared/API.md.
 import { NextResponse } from "next/server";
 import { z } from "zod";
-import { fieldIssues } from "./body";
+import { fieldIssues, validationMessage } from "./body";
 import { describeError, HttpError, isDatabaseDown } from "./errors";
 import { API_CSP, setSecurityHeaders } from "./security-headers";
 
@@ -12,7 +12,8 @@ export function errorResponse(err: unknown): NextResponse {
     return NextResponse.json({ error: err.message, ...err.extra }, { status: err.status, headers: err.headers });
   }
   if (err instanceof z.ZodError) {
-    return NextResponse.json({ error: "The request is not valid.", issues: fieldIssues(err) }, { status: 400 });
+    const issues = fieldIssues(err);
+    return NextResponse.json({ error: validationMessage(issues), issues }, { status: 400 });
   }
   if (isDatabaseDown(err)) {
     return NextResponse.json({ error: "The database cannot be reached right now. Try again in a moment." }, { status: 503 });

@@ -1,7 +1,10 @@
 // Coordinate sheets: per performer every set with its counts and position in the trade's words;
 // per set every dot. Built from a show file, so sheets and backups read the same data. Pure.
 import { describePosition } from "@/lib/field/words";
+import { facingInWords } from "@/lib/field/facing-words";
+import { instrumentSpreadDeg } from "@/lib/field/marks";
 import { facingWords } from "@/lib/imports/facing";
+import { instrumentName } from "@/lib/show/instrument-names";
 import type { ShowFile } from "@/lib/show-file/schema";
 
 export interface SheetDot {
@@ -9,17 +12,24 @@ export interface SheetDot {
   x: number;
   y: number;
   facingDeg: number;
-  /** "side 1: 2 steps outside the 35 yard line" */
+  /** "Side 1: 2 steps outside the 35 yard line" */
   sideToSide: string;
   /** "4 steps in front of the front hash" */
   frontToBack: string;
+  /** The facing as the drill CSV writes it ("front", "side 2", "30"). */
   facing: string;
+  /** The facing in words: "toward the press box", "toward side 2, 30° toward the back sideline". */
+  facingWords: string;
+  /** How wide the performer's instrument throws its sound (the mark's wedge, lib/field/marks.ts). */
+  spreadDeg: number;
 }
 
 export interface PerformerSheet {
   label: string;
   name: string | null;
   instrument: string;
+  /** The instrument as people say it: "Alto saxophone". */
+  instrumentName: string;
   section: string;
   part: string;
   rows: ({ set: string; counts: number } & Omit<SheetDot, "label">)[];
@@ -31,16 +41,18 @@ export interface SetSheet {
   dots: SheetDot[];
 }
 
-function dot(label: string, p: { x: number; y: number; facingDeg: number }, rules: ShowFile["show"]["fieldRules"]): SheetDot {
+function dot(label: string, p: { x: number; y: number; facingDeg: number }, rules: ShowFile["show"]["fieldRules"], instrument: string): SheetDot {
   const d = describePosition(p.x, p.y, rules);
   return {
     label,
     x: p.x,
     y: p.y,
     facingDeg: p.facingDeg,
-    sideToSide: d.side ? `side ${d.side}: ${d.sideToSide}` : d.sideToSide,
+    sideToSide: d.side ? `Side ${d.side}: ${d.sideToSide}` : d.sideToSide.replace(/^on/, "On"),
     frontToBack: d.frontToBack,
     facing: facingWords(p.facingDeg),
+    facingWords: facingInWords(p.facingDeg),
+    spreadDeg: instrumentSpreadDeg(instrument),
   };
 }
 
@@ -52,21 +64,23 @@ export function performerSheets(file: ShowFile): PerformerSheet[] {
     label: p.label,
     name: p.name,
     instrument: p.instrument,
+    instrumentName: instrumentName(p.instrument),
     section: p.section,
     part: p.part,
     rows: file.sets.flatMap((s) => {
       const at = s.positions.find((q) => q.label === p.label);
       if (!at) return [];
-      const { label: _l, ...rest } = dot(p.label, at, file.show.fieldRules);
+      const { label: _l, ...rest } = dot(p.label, at, file.show.fieldRules, p.instrument);
       return [{ set: s.number, counts: s.counts, ...rest }];
     }),
   }));
 }
 
 export function setSheets(file: ShowFile): SetSheet[] {
+  const instrumentOf = new Map(file.performers.map((p) => [p.label, p.instrument]));
   return file.sets.map((s) => ({
     number: s.number,
     counts: s.counts,
-    dots: s.positions.map((p) => dot(p.label, p, file.show.fieldRules)).sort(byLabel),
+    dots: s.positions.map((p) => dot(p.label, p, file.show.fieldRules, instrumentOf.get(p.label) ?? "")).sort(byLabel),
   }));
 }

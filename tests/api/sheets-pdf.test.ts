@@ -5,6 +5,8 @@ import { mkdirSync, readFileSync, statSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { positionFromWords } from "@/lib/field/words";
+import { labelCollisions } from "@/lib/sheets/label-layout";
+import { renderSheetsPdfWithLayout } from "@/lib/sheets/pdf";
 import { APP_URL, DEMO, signedIn, type Client } from "../support/api";
 import { privateShowCopy, uploadFile } from "../support/upload";
 
@@ -46,6 +48,50 @@ describe("the PDF", () => {
     expect(execFileSync("pdfinfo", [file]).toString()).toMatch(/Pages:\s+1\b/);
     execFileSync("pdftoppm", ["-f", "1", "-l", "1", "-r", "50", "-png", "-singlefile", file, path.join(outDir, "set-page1")]);
     expect((await download(copy.director, `/api/shows/${copy.showId}/sheets/pdf?set=999Z`)).status).toBe(404);
+  });
+});
+
+describe("the pictures and words of the sheets", () => {
+  it("places every set's labels apart (no label over another or over a dot), and pdftoppm renders a set page and a performer page", async () => {
+    const { body } = await copy.director.get(`/api/shows/${copy.showId}/sheets`);
+    const input = { programName: body.programName, showName: body.show.name, rules: body.show.fieldRules, performers: body.performers.slice(0, 2), sets: body.sets };
+    const { pdf, layout } = await renderSheetsPdfWithLayout(input);
+    expect(layout.setLabels).toHaveLength(body.sets.length);
+    for (const s of layout.setLabels) {
+      expect(s.labels).toHaveLength(body.sets.find((x: any) => x.number === s.set).dots.length);
+      // The dot radius the per-set picture draws (width / 240 of a 532 pt picture).
+      expect(labelCollisions(s.labels, 532 / 240), `set ${s.set}`).toEqual([]);
+    }
+    // The demo's blocks are denser than their labels: some stand away from their dot on a leader line.
+    expect(layout.setLabels.some((s) => s.labels.some((l) => l.leader))).toBe(true);
+    mkdirSync(outDir, { recursive: true });
+    const file = path.join(outDir, "layout.pdf");
+    writeFileSync(file, pdf);
+    // Page 1 is a performer's (a table and a picture per set), page 3 the first set's.
+    for (const page of ["1", "3"]) {
+      execFileSync("pdftoppm", ["-f", page, "-l", page, "-r", "60", "-png", "-singlefile", file, path.join(outDir, `layout-page${page}`)]);
+      expect(statSync(path.join(outDir, `layout-page${page}.png`)).size).toBeGreaterThan(4000);
+    }
+  });
+
+  it("writes positions in full words and facing in words, no shorthand, and names the instrument as people say it", async () => {
+    const { body } = await copy.director.get(`/api/shows/${copy.showId}/sheets`);
+    const dots = body.sets.flatMap((s: any) => s.dots);
+    for (const d of dots) {
+      expect(d.sideToSide).toMatch(/^(Side [12]: (on the|\d+(\.\d+)? steps? (inside|outside) the) (\d+ yard line|goal line)|On the 50 yard line)$/);
+      expect(d.frontToBack).toMatch(/^(on the|\d+(\.\d+)? steps? (in front of|behind) the) (front|back) (hash|sideline)$/);
+      expect(d.facingWords).toMatch(/^toward (the press box|side [12]|the back sideline)/);
+    }
+    const sax = body.performers.find((p: any) => p.instrument === "alto-sax");
+    expect(sax.instrumentName).toBe("Alto saxophone");
+    // The PDF's text holds the words, not the shorthand.
+    const pdf = await download(copy.director, `/api/shows/${copy.showId}/sheets/pdf?by=sets&set=${body.sets[0].number}`);
+    const file = path.join(outDir, "words.pdf");
+    writeFileSync(file, pdf.bytes);
+    const text = execFileSync("pdftotext", ["-layout", file, "-"]).toString();
+    expect(text).toMatch(/Side [12]: \d/);
+    expect(text).toMatch(/steps? (in front of|behind) the (front|back) hash/);
+    expect(text).not.toMatch(/\b(FH|BH|FSL|BSL)\b|\bS[12] \d+(\.\d+)? (in|out)\b/);
   });
 });
 

@@ -42,16 +42,17 @@ describe("show settings page", () => {
     await page.getByRole("button", { name: "Add a listening point" }).click();
     const point = page.getByRole("form", { name: "New listening point" });
     await point.getByLabel("Name").fill("Judge on the field");
-    await point.getByLabel("In words").fill("side 1: on the 40, 20 m in from the front sideline, 1.7 m up");
+    await point.getByLabel("In words").fill("side 1: on the 40, 20 yards in from the front sideline, 1.7 m up");
     await point.getByRole("button", { name: "Use these words" }).click();
-    await expect.poll(() => point.getByTestId("point-words").textContent()).toBe("side 1: on the 40 yard line, 20 m in from the front sideline, 1.7 m up");
+    await expect.poll(() => point.getByTestId("point-words").textContent()).toBe("side 1: on the 40 yard line, 20 yards in from the front sideline, 1.7 m up");
     await point.getByLabel(/^Background noise/).selectOption("crowd-during-performance");
     await page.screenshot({ path: path.join(SHOTS, "settings-new-point.png"), fullPage: true });
     await point.getByRole("button", { name: "Add this listening point" }).click();
     await page.getByText(/^Saved\. Choose "Judge on the field"/).waitFor();
     const judge = (await client.get(`/api/shows/${showId}`)).body.listeningPoints.find((l: any) => l.name === "Judge on the field");
-    // The 40 on side 1 is 10 yd (9.144 m) from the 50.
-    expect(judge).toMatchObject({ y: 20, z: 1.7, background: { preset: "crowd-during-performance" } });
+    // The 40 on side 1 is 10 yd (9.144 m) from the 50; 20 yd in from the front sideline is 18.288 m.
+    expect(judge).toMatchObject({ z: 1.7, background: { preset: "crowd-during-performance" } });
+    expect(judge.y).toBeCloseTo(18.288, 2);
     expect(judge.x).toBeCloseTo(-9.14, 2);
 
     // The box mix at the judge, in the field editor.
@@ -65,7 +66,7 @@ describe("show settings page", () => {
     await expect.poll(async () => Number(await page.getByTestId("mix-total").getAttribute("data-db"))).toBe(stored.mix.totalDbA);
     expect(stored.loudness.backgroundSone).toBeGreaterThan(0);
     await page.getByTestId("mix-loudness").getByText(`background ${stored.loudness.backgroundSone.toFixed(1)} sone`).waitFor();
-    // A judge 20 m in front of the band hears it louder than the box 25 m behind the sideline and 18 m up.
+    // A judge 20 yards in front of the band hears it louder than the box 25 m behind the sideline and 18 m up.
     const box = (await client.get(`/api/shows/${showId}/sets/${setId}/analysis?listeningPointId=${copy.pressBoxId}`)).body;
     expect(stored.mix.totalDbA).toBeGreaterThan(box.mix.totalDbA);
     await page.screenshot({ path: path.join(SHOTS, "settings-judge-mix.png") });

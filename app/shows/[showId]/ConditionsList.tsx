@@ -1,6 +1,7 @@
 // The show's weather, ground and field rules, with what they mean for the prediction.
 import type { Conditions, FieldRules } from "@/components/api-types";
-import { FIELD_RULES_WORDS, groundWords } from "./show-words";
+import { FIELD_RULES_WORDS } from "@/lib/field/rules-words";
+import { groundWords } from "./show-words";
 
 function Row({ term, value, note }: { term: string; value: string; note?: string }) {
   return (

@@ -59,7 +59,7 @@ export function ShowOverview({ showId }: { showId: string }) {
         </Card>
         <div className="grid items-start gap-6 md:grid-cols-2">
           <Card title="Listening points" titleId="points-title">
-            <ListeningPoints points={listeningPoints} />
+            <ListeningPoints points={listeningPoints} rules={s.fieldRules} />
           </Card>
           <Card title="Conditions" titleId="conditions-title">
             <ConditionsList conditions={s.conditions} fieldRules={s.fieldRules} />

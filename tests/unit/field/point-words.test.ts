@@ -41,14 +41,24 @@ describe("listeningPointFromWords", () => {
 });
 
 describe("describeListeningPoint", () => {
-  it("writes what listeningPointFromWords reads", () => {
-    expect(describeListeningPoint(0, -25, 18, "high-school")).toBe("on the 50 yard line, 25 m behind the front sideline, 18 m up");
+  it("says how far from a sideline in yards (25 m = 27.34 yd, 1 yd = 0.9144 m by definition) and the height in metres", () => {
+    expect(describeListeningPoint(0, -25, 18, "high-school")).toBe("on the 50 yard line, 27.3 yards behind the front sideline, 18 m up");
+    expect(describeListeningPoint(0, 0.9144, 1.7, "high-school")).toBe("on the 50 yard line, 1 yard in from the front sideline, 1.7 m up");
+  });
+
+  it("reads yards as written: 27.3 yards behind is 24.96 m behind", () => {
+    const r = listeningPointFromWords("on the 50, 27.3 yards behind the front sideline, 18 m up");
+    expect(r.ok).toBe(true);
+    if (r.ok) expect(r.y).toBeCloseTo(-27.3 * 0.9144, 9);
+  });
+
+  it("writes what listeningPointFromWords reads, to a twentieth of a yard", () => {
     for (const [x, y, z] of [[0, -25, 18], [-20 * STEP, 20, 1.7], [16 * STEP, WIDTH + 10, 12], [8 * STEP, WIDTH - 5, 0]] as const) {
       const back = listeningPointFromWords(describeListeningPoint(x, y, z, "college"));
       expect(back.ok, `${x},${y},${z}`).toBe(true);
       if (!back.ok) continue;
       expect(back.x).toBeCloseTo(x, 6);
-      expect(back.y).toBeCloseTo(y, 6);
+      expect(Math.abs(back.y - y)).toBeLessThanOrEqual(0.05 * 0.9144 + 1e-9);
       expect(back.z).toBeCloseTo(z, 6);
     }
   });

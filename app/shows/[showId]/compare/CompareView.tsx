@@ -12,6 +12,8 @@ import { apiKeys, useApi } from "@/components/use-api";
 import { ShowNav } from "@/components/ShowNav";
 import { CHECK_LABELS, VOICE_LABELS, formatDb } from "../music/voices";
 import { MiniField } from "@/components/MiniField";
+import { SpreadLegend } from "@/components/field/Legend";
+import { instrumentSpreadDeg } from "@/lib/field/marks";
 
 type Side = { set: { id: string; number: string }; mix: { totalDbA: number | null }; checks: { id: string; passed: boolean; status?: string }[] };
 type CompareResponse = {
@@ -25,7 +27,7 @@ type CompareResponse = {
     performers: { performerId: string; label: string; section: string; aDbA: number | null; bDbA: number | null; changeDb: number | null }[];
   };
 };
-type SetResponse = { positions: { performerId: string; x: number; y: number }[] };
+type SetResponse = { positions: { performerId: string; x: number; y: number; facingDeg: number }[] };
 const sel = "min-h-11 rounded-lg border border-ink-soft/40 bg-paper-raised px-2";
 
 export function CompareView({ showId, initialA, initialB }: { showId: string; initialA: string | null; initialB: string | null }) {
@@ -47,6 +49,8 @@ export function CompareView({ showId, initialA, initialB }: { showId: string; in
   if (!show.data) return <SkeletonCard rows={6} label="Loading the show…" />;
   const c = cmp.data;
   const changed = new Set((c?.changes.performers ?? []).slice(0, 5).map((p) => p.performerId));
+  const instrumentOf = new Map(show.data.performers.map((p) => [p.id, p.instrument]));
+  const marks = (positions: SetResponse["positions"]) => positions.map((p) => ({ ...p, spreadDeg: instrumentSpreadDeg(instrumentOf.get(p.performerId) ?? "") }));
   return (
     <>
       <Breadcrumbs items={crumbs} />
@@ -60,10 +64,11 @@ export function CompareView({ showId, initialA, initialB }: { showId: string; in
       </div>
       {!c ? <SkeletonCard rows={6} label="Comparing…" /> : (
         <div className="space-y-6">
+          <SpreadLegend />
           <div className="grid gap-6 md:grid-cols-2">
             {([c.a, c.b] as Side[]).map((side, i) => (
               <Card key={side.set.id} title={`Set ${side.set.number}: ${formatDb(side.mix.totalDbA)} dBA`} titleId={`side-${i}`}>
-                <MiniField dots={(i === 0 ? fieldA : fieldB).data?.positions ?? []} highlight={changed} title={`Field at set ${side.set.number}; the players whose contribution changed most are larger and orange`} />
+                <MiniField dots={marks((i === 0 ? fieldA : fieldB).data?.positions ?? [])} highlight={changed} title={`Field at set ${side.set.number}; the players whose contribution changed most are larger and orange`} />
                 <ul className="mt-3 flex flex-wrap gap-2 text-sm">
                   {side.checks.map((k) => k.status === "not-applicable" ? (
                     <li key={k.id} className="rounded bg-paper-sunk px-2 py-1 text-ink-soft">– {CHECK_LABELS[k.id]}: not applicable</li>

@@ -1,7 +1,12 @@
 // The field seen from the press box (front sideline at the bottom, side 1 on the left), zoomed to
-// where the band stands; each performer a dot coloured by the level at their ears, outlined dark
+// where the band stands; each performer's mark (the sound wedge of their instrument toward their
+// facing, in their voice's colour) with the dot coloured by the level at their ears, outlined dark
 // where the dose passes the limit. Labels for the most exposed players and the selected one.
 import { END_LINE_X_M, FIELD_WIDTH_M, GOAL_LINE_X_M, hashesY, yardLines, type FieldRules } from "@/lib/field/geometry";
+import { PerformerMark } from "@/components/field/PerformerMark";
+import { VOICE_STYLES } from "@/components/field/palette";
+import type { VoiceOrTacet } from "@/lib/acoustics/types";
+import { instrumentSpreadDeg } from "@/lib/field/marks";
 import { levelStep, type HearingPerformer } from "./hearing-types";
 
 const PAD_X = 8;
@@ -76,19 +81,20 @@ export function HearingField({ performers, rules, standard, selectedId, onSelect
         const over = p[standard].dose >= 1;
         const selected = p.performerId === selectedId;
         return (
-          <circle
-            key={p.performerId}
-            cx={sx(p.x)}
-            cy={sy(p.y)}
-            r={DOT_R}
-            fill={levelStep(p.dbA).fill}
-            stroke={selected ? "#1f6fb5" : over ? "#1c2430" : "#6b7280"}
-            strokeWidth={selected ? 0.32 : over ? 0.24 : 0.08}
-            onClick={() => onSelect(p.performerId)}
-            className="cursor-pointer"
-          >
+          <g key={p.performerId} onClick={() => onSelect(p.performerId)} className="cursor-pointer">
             <title>{`${p.label} (${p.section}): ${p.dbA === null ? "no one else sounding" : `${p.dbA.toFixed(1)} dBA`}`}</title>
-          </circle>
+            <PerformerMark
+              cx={sx(p.x)}
+              cy={sy(p.y)}
+              r={DOT_R}
+              facingDeg={p.facingDeg}
+              spreadDeg={instrumentSpreadDeg(p.instrument)}
+              style={VOICE_STYLES[(p.voice in VOICE_STYLES ? p.voice : "tacet") as VoiceOrTacet]}
+              dotFill={levelStep(p.dbA).fill}
+              dotStroke={selected ? "#1f6fb5" : over ? "#1c2430" : "#6b7280"}
+              dotStrokeWidth={selected ? 0.32 : over ? 0.24 : 0.08}
+            />
+          </g>
         );
       })}
       {performers

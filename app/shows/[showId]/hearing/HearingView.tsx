@@ -14,6 +14,7 @@ import { SortableTable, type Column } from "@/components/SortableTable";
 import { apiKeys, useApi } from "@/components/use-api";
 import { ShowNav } from "@/components/ShowNav";
 import { HearingCautions } from "./HearingCautions";
+import { SpreadLegend } from "@/components/field/Legend";
 import { HearingField } from "./HearingField";
 import { LEVEL_STEPS, type HearingPerformer, type HearingResponse } from "./hearing-types";
 
@@ -68,7 +69,7 @@ export function HearingView({ showId }: { showId: string }) {
     <>
       <Breadcrumbs items={crumbs} />
       <ShowNav showId={showId} />
-      <PageTitle sub="The estimated level at each performer's ears (1.6 m) from every other player in the set, and the noise dose of a rehearsal at that level.">Hearing map</PageTitle>
+      <PageTitle sub="The estimated level at each performer's ears (1.6 m above the field) from every other player in the set, and the noise dose of a rehearsal at that level.">Hearing map</PageTitle>
       <NextStepNotice showId={showId} need="drill" />
       <div className="space-y-6">
         <HearingCautions criteria={map.data?.criteria ?? { niosh: { levelDbA: 85, hours: 8, exchangeDb: 3, source: "NIOSH 98-126 (1998)" }, osha: { levelDbA: 90, hours: 8, exchangeDb: 5, source: "OSHA 29 CFR 1910.95" } }} anyOver={over.length > 0} />
@@ -105,6 +106,9 @@ export function HearingView({ showId }: { showId: string }) {
           ) : (
             <>
               <HearingField performers={performers} rules={show.data.show.fieldRules} standard={standard} selectedId={selectedId} onSelect={setSelectedId} />
+              <div className="mt-2">
+                <SpreadLegend />
+              </div>
               <div className="mt-3 flex flex-wrap items-center gap-x-5 gap-y-2" aria-label="Legend">
                 <span className="font-semibold">Level at the ears (dBA, estimated):</span>
                 {LEVEL_STEPS.map((s) => (

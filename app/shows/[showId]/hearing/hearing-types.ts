@@ -8,6 +8,8 @@ export type HearingPerformer = {
   playing: boolean;
   x: number;
   y: number;
+  facingDeg: number;
+  voice: string;
   dbA: number | null;
   loudestSource: string | null;
   niosh: Exposure;

@@ -10,6 +10,7 @@ import { FormMessage } from "@/components/FormMessage";
 import { PageTitle } from "@/components/PageTitle";
 import { useApi } from "@/components/use-api";
 import { ShowNav } from "@/components/ShowNav";
+import { CsvFormat } from "./CsvFormat";
 import { PreviewPanel, type Preview } from "./PreviewPanel";
 
 type Upload = { id: string; kind: string; fileName: string; sizeBytes: number; uploadedAt: string; uploadedBy: string | null; confirmedAt: string | null };
@@ -89,8 +90,9 @@ export function ImportsView({ showId }: { showId: string }) {
                 </label>
                 <input id="file" name="file" type="file" accept=".csv,text/csv" required className="mt-1 block w-full min-h-11" />
                 <p className="mt-1 text-sm text-ink-soft">
-                  At most 1 MB. Examples: <a className="underline" href="/examples/drill.csv">drill.csv</a>, <a className="underline" href="/examples/roster.csv">roster.csv</a>. The columns are described in the README.
+                  At most 1 MB. Examples: <a className="underline" href="/examples/drill.csv">drill.csv</a>, <a className="underline" href="/examples/roster.csv">roster.csv</a>. The columns are described below.
                 </p>
+                <CsvFormat />
               </div>
               <Button type="submit" disabled={busy}>
                 Preview the import

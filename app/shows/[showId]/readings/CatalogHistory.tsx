@@ -5,6 +5,8 @@ import { Button } from "@/components/Button";
 import { ApiError, sendJson } from "@/components/fetcher";
 import { FormMessage } from "@/components/FormMessage";
 import type { ApiState } from "@/components/use-api";
+import { plainSource } from "@/lib/sources/plain-source";
+import { instrumentName } from "../instrument-options";
 import type { CatalogResponse } from "./readings-types";
 
 const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
@@ -62,8 +64,8 @@ export function CatalogHistory({ programId, catalog, canRestore, onChanged }: { 
             <tbody>
               {Object.entries(versions[0].provenance).map(([key, p]) => (
                 <tr key={key} className="border-t border-ink/10">
-                  <td className="py-1 pr-3">{key}</td>
-                  <td className="py-1 pr-3">{p.kind === "memory" ? `From memory (${p.text})` : p.text}</td>
+                  <td className="py-1 pr-3">{instrumentName(key)}</td>
+                  <td className="py-1 pr-3">{plainSource(p.text)}</td>
                   <td className="py-1 text-right tabular-nums">{p.uncertaintyDb < 1 ? p.uncertaintyDb.toFixed(1) : p.uncertaintyDb.toFixed(0)}</td>
                 </tr>
               ))}

@@ -51,7 +51,7 @@ export function DetailsForm({ data, editable }: { data: ShowResponse; editable: 
       </div>
       <TextField id="temperature" label="Temperature (°C)" hint="The evening of the performance, −20 to 50." type="number" step="0.1" inputMode="decimal" value={form.temperatureC} onChange={set("temperatureC")} disabled={!editable} errors={issue("conditions.temperatureC")} />
       <TextField id="humidity" label="Relative humidity (%)" hint="10 to 100; dry air takes the highs." type="number" step="1" inputMode="decimal" value={form.relativeHumidityPct} onChange={set("relativeHumidityPct")} disabled={!editable} errors={issue("conditions.relativeHumidityPct")} />
-      <TextField id="pressure" label="Air pressure (kPa)" hint="101.3 at sea level; about 84 at 1600 m." type="number" step="0.1" inputMode="decimal" value={form.pressureKPa} onChange={set("pressureKPa")} disabled={!editable} errors={issue("conditions.pressureKPa")} />
+      <TextField id="pressure" label="Air pressure (kPa)" hint="101.3 at sea level; about 84 at 1600 m above sea level." type="number" step="0.1" inputMode="decimal" value={form.pressureKPa} onChange={set("pressureKPa")} disabled={!editable} errors={issue("conditions.pressureKPa")} />
       {editable ? (
         <div className="flex flex-wrap items-center gap-3 sm:col-span-2">
           <Button type="submit" disabled={save.busy}>

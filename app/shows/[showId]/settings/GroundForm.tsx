@@ -13,7 +13,6 @@ const selectCls = "mt-1 block min-h-12 w-full rounded-lg border border-ink/30 bg
 
 /** A ground choice with a custom G beside it. */
 export function GroundPicker(props: { id: string; label: string; hint: string; choices: GroundChoice[]; value: { key: string; g: string }; onChange(v: { key: string; g: string }): void; disabled: boolean }) {
-  const chosen = props.choices.find((c) => c.key === props.value.key);
   return (
     <div>
       <label htmlFor={props.id} className="block font-semibold text-ink">
@@ -33,8 +32,6 @@ export function GroundPicker(props: { id: string; label: string; hint: string; c
           G (0 hard … 1 porous){" "}
           <input aria-label={`${props.label}: custom G`} type="number" min={0} max={1} step={0.05} className="min-h-10 w-24 rounded-md border border-ink/30 px-2" value={props.value.g} disabled={props.disabled} onChange={(e) => props.onChange({ ...props.value, g: e.target.value })} />
         </label>
-      ) : chosen ? (
-        <p className="mt-1 text-sm text-ink-soft">{chosen.source}</p>
       ) : null}
     </div>
   );

@@ -1,9 +1,11 @@
 "use client";
 // One listening point: its name, its place (in words, by numbers or on the field), its surroundings and its background.
+import Link from "next/link";
 import { useState } from "react";
 import type { Background, FieldRules, ListeningPoint } from "@/components/api-types";
 import { Button } from "@/components/Button";
 import { FormMessage } from "@/components/FormMessage";
+import { YARD_M } from "@/lib/field/geometry";
 import { describeListeningPoint, listeningPointFromWords } from "@/lib/field/point-words";
 import { BACKGROUND_CHOICES, choiceOf, OCTAVE_LABELS, POINT_SURROUNDINGS } from "./choices";
 import { GroundPicker, groundOf } from "./GroundForm";
@@ -18,7 +20,8 @@ export function draftOf(p: ListeningPoint | null): PointDraft {
     y: String(p?.y ?? 20),
     z: String(p?.z ?? 1.7),
     surroundings: { key: choiceOf(POINT_SURROUNDINGS, p?.groundFactor), g: String(p?.groundFactor ?? 0) },
-    surroundingsM: String(p?.surroundingsM ?? 0),
+    // Shown in yards (field lengths are in yards or steps), stored in metres.
+    surroundingsM: String(Math.round(((p?.surroundingsM ?? 0) / YARD_M) * 10) / 10),
     background: !bg ? "none" : "preset" in bg ? bg.preset : "custom",
     octaves: bg && "octaveDb" in bg ? bg.octaveDb.map(String) : ["60", "58", "56", "54", "50", "46", "40", "34"],
   };
@@ -27,7 +30,7 @@ export function draftOf(p: ListeningPoint | null): PointDraft {
 /** The API body of a draft. */
 export function bodyOf(d: PointDraft) {
   const background: Background | null = d.background === "none" ? null : d.background === "custom" ? { octaveDb: d.octaves.map(Number) } : ({ preset: d.background } as Background);
-  return { name: d.name, x: Number(d.x), y: Number(d.y), z: Number(d.z), groundFactor: groundOf(POINT_SURROUNDINGS, d.surroundings), surroundingsM: Number(d.surroundingsM), background };
+  return { name: d.name, x: Number(d.x), y: Number(d.y), z: Number(d.z), groundFactor: groundOf(POINT_SURROUNDINGS, d.surroundings), surroundingsM: Number(d.surroundingsM) * YARD_M, background };
 }
 
 const input = "min-h-11 w-24 rounded-md border border-ink/30 px-2 tabular-nums";
@@ -72,7 +75,7 @@ export function PointForm(props: {
           <div className="flex flex-wrap items-end gap-2">
             <label className="min-w-64 flex-1 text-sm">
               <span className="block">In words</span>
-              <input className="min-h-11 w-full rounded-md border border-ink/30 px-2" value={words} placeholder="on the 50, 25 m behind the front sideline, 18 m up" onChange={(e) => setWords(e.target.value)} />
+              <input className="min-h-11 w-full rounded-md border border-ink/30 px-2" value={words} placeholder="on the 50, 27 yards behind the front sideline, 18 m up" onChange={(e) => setWords(e.target.value)} />
             </label>
             <Button
               variant="secondary"
@@ -93,14 +96,6 @@ export function PointForm(props: {
         {wordsError ? <p className="text-sm font-medium text-signal-bad" role="alert">{wordsError}</p> : null}
         <div className="flex flex-wrap gap-3 text-sm">
           <label>
-            <span className="block">x (m toward side 2)</span>
-            <input className={input} type="number" step="0.1" value={d.x} disabled={dis} onChange={(e) => set({ x: e.target.value })} />
-          </label>
-          <label>
-            <span className="block">y (m from the front sideline)</span>
-            <input className={input} type="number" step="0.1" value={d.y} disabled={dis} onChange={(e) => set({ y: e.target.value })} />
-          </label>
-          <label>
             <span className="block">Height (m)</span>
             <input className={input} type="number" step="0.1" min={0} value={d.z} disabled={dis} onChange={(e) => set({ z: e.target.value })} />
           </label>
@@ -109,7 +104,7 @@ export function PointForm(props: {
       <div className="grid gap-3">
         <GroundPicker id={`surroundings-${props.isNew ? "new" : "edit"}`} label="Ground around the point" hint="For a box above the stands: concrete." choices={POINT_SURROUNDINGS} value={d.surroundings} onChange={(v) => set({ surroundings: v })} disabled={dis} />
         <label className="text-sm">
-          <span className="block font-semibold">How far it reaches toward the field (m)</span>
+          <span className="block font-semibold">How far it reaches toward the field (yards)</span>
           <input className={input} type="number" min={0} step="1" value={d.surroundingsM} disabled={dis || d.surroundings.key === "between"} onChange={(e) => set({ surroundingsM: e.target.value })} />
         </label>
       </div>
@@ -125,7 +120,9 @@ export function PointForm(props: {
             ))}
           </select>
         </label>
-        <p className="mt-1 text-sm text-ink-soft">{BACKGROUND_CHOICES.find((c) => c.key === d.background)?.source}</p>
+        <p className="mt-1 text-sm text-ink-soft">
+          Where the ground and background values come from: <Link className="text-turf-dark underline" href="/sources#background">Where the numbers come from</Link>.
+        </p>
         {d.background === "custom" ? (
           <fieldset className="mt-2 flex flex-wrap gap-2">
             <legend className="text-sm">Octave-band levels, dB SPL (Hz)</legend>

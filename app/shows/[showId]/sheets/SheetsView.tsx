@@ -1,25 +1,28 @@
 "use client";
 // Coordinate sheets on screen and on paper: a sheet per performer (every set in the trade's words) or a sheet per set (the whole field).
+import { FIELD_RULES_WORDS } from "@/lib/field/rules-words";
 import Link from "next/link";
 import { Breadcrumbs } from "@/components/Breadcrumbs";
 import { Button, buttonClass } from "@/components/Button";
 import { ErrorState } from "@/components/ErrorState";
+import { plural } from "@/components/format";
 import { NextStepNotice } from "@/components/NextStepNotice";
 import { PageTitle } from "@/components/PageTitle";
 import { useApi } from "@/components/use-api";
 import { ShowNav } from "@/components/ShowNav";
 import type { FieldRules } from "@/lib/field/geometry";
 import type { PerformerSheet, SetSheet } from "@/lib/sheets/coordinates";
+import { MARK_KEY } from "@/lib/sheets/mark-key";
 import { FieldDrawing } from "./FieldDrawing";
 
 type Sheets = { programName: string; show: { id: string; name: string; fieldRules: FieldRules }; performers: PerformerSheet[]; sets: SetSheet[] };
 
-const RULES_WORDS: Record<FieldRules, string> = { "high-school": "high-school hashes (53 ft 4 in from each sideline)", college: "college hashes (60 ft from each sideline)" };
 
 export function SheetsView({ showId, by }: { showId: string; by: "performers" | "sets" }) {
   const sheets = useApi<Sheets>(`/api/shows/${showId}/sheets`);
   if (sheets.error) return <ErrorState error={sheets.error} what="show" onRetry={() => sheets.mutate()} />;
   const data = sheets.data;
+  const setsByNumber = new Map((data?.sets ?? []).map((s) => [s.number, s]));
   const name = data?.show.name ?? "Show";
   const tab = (which: "performers" | "sets", label: string) => (
     <Link href={`/shows/${showId}/sheets?by=${which}`} aria-current={by === which ? "page" : undefined} className={buttonClass(by === which ? "primary" : "secondary")}>
@@ -31,7 +34,7 @@ export function SheetsView({ showId, by }: { showId: string; by: "performers" | 
       <div className="no-print">
         <Breadcrumbs items={[{ label: "Programs", href: "/programs" }, { label: name, href: `/shows/${showId}` }, { label: "Coordinate sheets" }]} />
         <ShowNav showId={showId} />
-        <PageTitle sub={`Steps are 8 to 5 (22.5 in). ${data ? RULES_WORDS[data.show.fieldRules] : ""}. Side 1 is on the left seen from the press box.`}>Coordinate sheets</PageTitle>
+        <PageTitle sub={`A step is 8 to 5 (22.5 in). ${data ? `${FIELD_RULES_WORDS[data.show.fieldRules].sheet}. ` : ""}Side 1 is on the left seen from the press box; inside means toward the 50.`}>Coordinate sheets</PageTitle>
         <NextStepNotice showId={showId} need="drill" />
         <div className="mb-6 flex flex-wrap items-center gap-3">
           {tab("performers", "A sheet per performer")}
@@ -65,7 +68,7 @@ export function SheetsView({ showId, by }: { showId: string; by: "performers" | 
               </Link>
               <p className="text-ink-soft">
                 {p.section}
-                {p.part ? `, ${p.part}` : ""} · {p.instrument}
+                {p.part ? `, ${p.part}` : ""} · {p.instrumentName}
               </p>
               <table className="mt-3 w-full text-left">
                 <thead>
@@ -84,11 +87,22 @@ export function SheetsView({ showId, by }: { showId: string; by: "performers" | 
                       <td className="py-1 pr-3">{r.counts}</td>
                       <td className="py-1 pr-3">{r.sideToSide}</td>
                       <td className="py-1 pr-3">{r.frontToBack}</td>
-                      <td className="py-1">{r.facing}</td>
+                      <td className="py-1">{r.facingWords}</td>
                     </tr>
                   ))}
                 </tbody>
               </table>
+              <ol className="mt-4 grid grid-cols-2 gap-3 sm:grid-cols-4" aria-label={`Where ${p.label} stands in each set`}>
+                {p.rows.map((r) => {
+                  const set = setsByNumber.get(r.set);
+                  return set ? (
+                    <li key={r.set} className="break-inside-avoid">
+                      <p className="text-xs font-semibold">Set {r.set}</p>
+                      <FieldDrawing rules={data.show.fieldRules} dots={set.dots} mine={p.label} width={127} title={`Set ${r.set}: ${p.label} among the band`} />
+                    </li>
+                  ) : null;
+                })}
+              </ol>
             </section>
           ))}
         </div>
@@ -100,12 +114,16 @@ export function SheetsView({ showId, by }: { showId: string; by: "performers" | 
                 {data.programName} · {data.show.name}
               </p>
               <h2 id={`set-${s.number}`} className="text-2xl font-bold text-ink">
-                Set {s.number} — {s.counts} counts
+                Set {s.number}
               </h2>
+              <p className="text-ink-soft">
+                {plural(s.counts, "count")} from the set before · {plural(s.dots.length, "performer")}
+              </p>
               <div className="mt-3">
                 <FieldDrawing rules={data.show.fieldRules} dots={s.dots} title={`Set ${s.number}: every dot on the field`} />
+                <p className="mt-1 text-xs text-ink-soft">{MARK_KEY}</p>
               </div>
-              <ul className="mt-3 columns-2 gap-6 text-xs leading-5 print:columns-3 print:gap-4 print:text-[6pt] print:leading-[1.2]">
+              <ul className="mt-3 columns-1 gap-6 text-xs leading-5 sm:columns-2 print:columns-2 print:gap-3 print:text-[6.5pt] print:leading-[1.25]">
                 {s.dots.map((d) => (
                   <li key={d.label} className="break-inside-avoid">
                     <span className="font-semibold">{d.label}</span> {d.sideToSide}; {d.frontToBack}

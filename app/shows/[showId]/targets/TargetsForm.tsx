@@ -13,7 +13,8 @@ import { TextField } from "@/components/TextField";
 import { apiKeys, useApi } from "@/components/use-api";
 import type { ShowResponse } from "@/components/api-types";
 import { ShowNav } from "@/components/ShowNav";
-import { TARGET_FIELDS, type TargetKey } from "./target-fields";
+import Link from "next/link";
+import { perUnit, TARGET_FIELDS, type TargetKey } from "./target-fields";
 
 type TargetsResponse = {
   targets: Record<TargetKey, number> & { pyramidVoices: string[] };
@@ -47,7 +48,9 @@ export function TargetsForm({ showId }: { showId: string }) {
   }
   if (!targets.data) return <SkeletonCard rows={6} label="Loading the balance targets…" />;
   const { canEdit, defaults } = targets.data;
-  const value = (k: TargetKey) => draft[k] ?? String(Math.round(targets.data!.targets[k] * 100) / 100);
+  // Shown in the form's unit (yards for a width), rounded to hundredths.
+  const shown = (k: TargetKey, stored: number) => Math.round((stored / perUnit(k)) * 100) / 100;
+  const value = (k: TargetKey) => draft[k] ?? String(shown(k, targets.data!.targets[k]));
 
   async function save(body: unknown, done: string) {
     setPending(true);
@@ -71,7 +74,7 @@ export function TargetsForm({ showId }: { showId: string }) {
     event.preventDefault();
     // Only the fields the director changed are stored over what was kept; the rest stay at their (unrounded) values.
     const out: Record<string, unknown> = { ...(targets.data!.custom ?? {}) };
-    for (const [key, text] of Object.entries(draft)) out[key] = Number(text);
+    for (const [key, text] of Object.entries(draft)) out[key] = Number(text) * perUnit(key as TargetKey);
     void save({ targets: out }, "Saved. Every set's checks now use these thresholds.");
   }
 
@@ -80,6 +83,9 @@ export function TargetsForm({ showId }: { showId: string }) {
       <Breadcrumbs items={crumbs} />
       <ShowNav showId={showId} />
       <PageTitle sub="The thresholds the balance checks and the balance plan use for this show.">Balance targets</PageTitle>
+      <p className="mb-4 text-sm text-ink-soft">
+        Where each default comes from: <Link className="text-turf-dark underline" href="/sources#thresholds">Where the numbers come from</Link>.
+      </p>
       <Card title="Thresholds" titleId="targets-title">
         <form onSubmit={submit} noValidate className="space-y-5" aria-describedby="targets-status">
           {TARGET_FIELDS.map((f) => (
@@ -87,12 +93,12 @@ export function TargetsForm({ showId }: { showId: string }) {
               key={f.key}
               id={`target-${f.key}`}
               label={`${f.label} (${f.unit})`}
-              hint={`Default ${Math.round(defaults[f.key] * 100) / 100} ${f.unit}: ${f.basis}.`}
+              hint={`Default ${shown(f.key, defaults[f.key])} ${f.unit}.`}
               type="number"
               inputMode="decimal"
               step={f.step}
-              min={targets.data!.ranges[f.key][0]}
-              max={targets.data!.ranges[f.key][1]}
+              min={shown(f.key, targets.data!.ranges[f.key][0])}
+              max={shown(f.key, targets.data!.ranges[f.key][1])}
               value={value(f.key)}
               readOnly={!canEdit}
               errors={issues[f.key]}

@@ -49,7 +49,7 @@ export function PerformerDots({ showId, label }: { showId: string; label: string
               </h2>
               <p className="mt-1 text-lg">{r.sideToSide}</p>
               <p className="text-lg">{r.frontToBack}</p>
-              <p className="text-ink-soft">Facing {r.facing}</p>
+              <p className="text-ink-soft">Facing {r.facingWords}</p>
               {set ? (
                 <div className="mt-2">
                   <MiniField

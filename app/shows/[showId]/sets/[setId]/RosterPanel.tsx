@@ -1,8 +1,7 @@
 // Performers not yet in this set, to place with a click on the field; and adding new ones by instrument.
 import { useState } from "react";
 import type { Performer } from "@/components/api-types";
-import { humanize } from "@/components/format";
-import { INSTRUMENT_OPTIONS } from "../../instrument-options";
+import { INSTRUMENT_OPTIONS, instrumentName } from "../../instrument-options";
 
 export function RosterPanel(props: {
   unplaced: Performer[];
@@ -29,7 +28,7 @@ export function RosterPanel(props: {
               disabled={!props.editable}
               onClick={() => props.onPlace(props.placingId === p.id ? null : p.id)}
               aria-pressed={props.placingId === p.id}
-              title={`${humanize(p.instrument)}, ${p.section}`}
+              title={`${instrumentName(p.instrument)}, ${p.section}`}
               className={`min-h-9 rounded-md border px-2 text-sm font-semibold ${props.placingId === p.id ? "border-[#1f6fb5] bg-[#1f6fb5] text-white" : "border-ink/20 bg-paper hover:bg-paper-sunk"}`}
             >
               {p.label}

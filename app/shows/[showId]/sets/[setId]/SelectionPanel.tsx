@@ -1,18 +1,15 @@
-// The selected performer (or group): who, where in metres and in the trade's words, and what reaches the box.
+// The selected performer (or group): who, where in the trade's words, and what reaches the box.
 import type { Performer } from "@/components/api-types";
-import { humanize, metres, signedDb } from "@/components/format";
+import { signedDb } from "@/components/format";
 import { VOICE_STYLES } from "@/components/field/palette";
 import type { VoiceOrTacet } from "@/lib/acoustics/types";
 import type { Spot } from "@/lib/editor/layout";
 import type { FieldRules } from "@/lib/field/geometry";
+import { facingInWords } from "@/lib/field/facing-words";
 import { describePosition } from "@/lib/field/words";
+import { instrumentName } from "../../instrument-options";
 import { useLiveMix, type LiveMix } from "./live-mix";
 
-const facingWords = (deg: number) => {
-  const d = Math.round(deg) % 360;
-  const named: Record<number, string> = { 0: "front", 90: "side 2", 180: "back", 270: "side 1" };
-  return named[d] ? `${d}° (${named[d]})` : `${d}°`;
-};
 
 export function SelectionPanel(props: {
   /** A drag's live mix: the contribution follows it while dragging. */
@@ -38,7 +35,7 @@ export function SelectionPanel(props: {
   return (
     <div data-testid="selection" data-performer={p.id}>
       <h3 className="text-lg font-semibold">
-        {p.label} <span className="font-normal text-ink-soft">{humanize(p.instrument)}</span>
+        {p.label} <span className="font-normal text-ink-soft">{instrumentName(p.instrument)}</span>
       </h3>
       <dl className="mt-1 grid grid-cols-[6.5rem_1fr] gap-x-2 gap-y-0.5 text-sm">
         <dt className="text-ink-soft">Section</dt>
@@ -53,13 +50,11 @@ export function SelectionPanel(props: {
         {spot && words ? (
           <>
             <dt className="text-ink-soft">Facing</dt>
-            <dd>{facingWords(spot.facingDeg)}</dd>
+            <dd>{facingInWords(spot.facingDeg)}</dd>
             <dt className="text-ink-soft">Position</dt>
-            <dd data-testid="selection-metres" data-x={spot.x} data-y={spot.y}>
-              x {metres(spot.x)}, y {metres(spot.y)}
+            <dd data-testid="selection-words" data-x={spot.x} data-y={spot.y}>
+              {words.text}
             </dd>
-            <dt className="text-ink-soft">In steps</dt>
-            <dd data-testid="selection-words">{words.text}</dd>
             <dt className="text-ink-soft">At {props.pointName}</dt>
             <dd className="font-semibold tabular-nums" data-testid="selection-contribution" data-db={contribution ?? ""}>
               {contribution !== undefined && Number.isFinite(contribution) ? `${contribution.toFixed(1)} dBA` : "not sounding"}

@@ -14,7 +14,8 @@ import { useApi } from "@/components/use-api";
 import { FieldCanvas } from "@/components/field/FieldCanvas";
 import { Legend } from "@/components/field/Legend";
 import { MixPanel, type MixFigures } from "@/components/field/MixPanel";
-import { FAMILY_SHAPES, VOICE_STYLES } from "@/components/field/palette";
+import { VOICE_STYLES } from "@/components/field/palette";
+import { instrumentSpreadDeg } from "@/lib/field/marks";
 import type { StageDot } from "@/components/field/FieldStage";
 import { DEFAULT_INSTRUMENTS, positionsAtCount } from "@/lib/acoustics";
 import { snapToStep } from "@/lib/field/geometry";
@@ -161,8 +162,7 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
       Object.entries(shown).flatMap(([id, s]) => {
         const p = byId.get(id);
         if (!p) return [];
-        const family = catalog[p.instrument]?.family ?? "woodwind";
-        return [{ id, label: p.label, shape: FAMILY_SHAPES[family].shape, style: VOICE_STYLES[voiceOf.get(id) ?? "tacet"], x: s.x, y: s.y, facingDeg: s.facingDeg }];
+        return [{ id, label: p.label, spreadDeg: instrumentSpreadDeg(p.instrument, catalog), style: VOICE_STYLES[voiceOf.get(id) ?? "tacet"], x: s.x, y: s.y, facingDeg: s.facingDeg }];
       }),
     [shown, byId, catalog, voiceOf],
   );

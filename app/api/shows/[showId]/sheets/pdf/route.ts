@@ -17,11 +17,12 @@ export const GET = route<{ showId: string }>(async (req, { showId }) => {
   const label = q.get("label");
   const setNumber = q.get("set");
   let performers = by === "sets" ? [] : performerSheets(file);
-  let sets = by === "performers" ? [] : setSheets(file);
+  const allSets = setSheets(file);
+  let sets = by === "performers" ? [] : allSets;
   if (label) performers = performers.filter((p) => p.label.toLowerCase() === label.toLowerCase());
   if (setNumber) sets = sets.filter((s) => s.number.toLowerCase() === setNumber.toLowerCase());
   if ((label && !performers.length && !setNumber) || (setNumber && !sets.length && !label)) throw notFound("No such performer or set in this show.");
-  const pdf = await renderSheetsPdf({ programName, showName: file.show.name, rules: file.show.fieldRules, performers, sets });
+  const pdf = await renderSheetsPdf({ programName, showName: file.show.name, rules: file.show.fieldRules, performers, sets, allSets });
   const name = `${fileSlug(file.show.name)}-coordinates${label ? `-${fileSlug(label)}` : ""}${setNumber ? `-set-${fileSlug(setNumber)}` : ""}.pdf`;
   return new Response(new Uint8Array(pdf), { headers: { "content-type": "application/pdf", "content-disposition": `inline; filename="${name}"` } });
 });
