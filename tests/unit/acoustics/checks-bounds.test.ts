@@ -106,3 +106,12 @@ describe("what each check looks at", () => {
     expect(check(band, "wide-form-edges").detail).toBe("Too few winds play to make a form.");
   });
 });
+
+describe("stand-outs measures each player from the median of the rest, in order of loudness", () => {
+  it("four trumpets 0, 20, 10 and 1 dB strong: the 20 and the 10 each stand over the rest's median (the 1 dB player), the others do not", () => {
+    // The rest of the 10 dB player are 0, 1 and 20 dB strong: their median is the 1 dB player, about
+    // 9 phon under it, over the 6 asked. Taken in roster order instead, the middle one would be the 20.
+    const band = [0, 20, 10, 1].map((strengthDb, k) => at({ id: `T${k}`, x: k, y: 10, voice: "accompaniment", strengthDb }));
+    expect(check(band, "stand-outs").performerIds).toEqual(["T1", "T2"]);
+  });
+});
