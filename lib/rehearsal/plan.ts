@@ -30,11 +30,13 @@ export interface PlannedRow {
   playedDynamic: Dynamic;
   /** Null where the stored JSON had no finite value. */
   changeDb: number | null;
+  /** One player of a section that otherwise rests or plays something else: a soloist. */
+  solo?: boolean;
 }
 
 export interface BuildUpStep {
   step: number;
-  /** "Melody alone", "Add the countermelody", "Add accompaniment and bass". */
+  /** "The soloist alone", "Melody alone", "Add the countermelody", "Add accompaniment and bass". */
   title: string;
   sections: string[];
 }
@@ -104,7 +106,10 @@ export function buildItem(input: RehearsalItemInput): RehearsalItem {
     }
   }
   const sounding = input.sections.filter((s) => s.voice !== "tacet");
-  const buildUp = STEPS.map((st) => ({ title: st.title, sections: sounding.filter((s) => st.voices.includes(s.voice)).map((s) => s.section).sort() }))
+  // A soloist is heard alone first, so the staff hear what the band must leave room for.
+  const soloists = (input.plan?.entries ?? []).filter((e) => e.solo).map((e) => e.who);
+  const soloStep = soloists.length ? [{ title: soloists.length === 1 ? "The soloist alone" : "The soloists alone", sections: soloists }] : [];
+  const buildUp = [...soloStep, ...STEPS.map((st) => ({ title: soloists.length && st.voices.includes("melody") ? "Add the melody" : st.title, sections: sounding.filter((s) => st.voices.includes(s.voice)).map((s) => s.section).sort() }))]
     .filter((st) => st.sections.length)
     .map((st, i) => ({ step: i + 1, ...st }));
   // The phrase's plan; a set outside any phrase falls back to its own set's plan.

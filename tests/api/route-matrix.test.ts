@@ -103,6 +103,11 @@ const RULES: Record<string, Rule> = {
   "GET shows/[showId]/rehearsal-plan": { roles: ALL },
   "POST shows/[showId]/rehearsal-plan": { roles: ALL, body: "json" },
   "POST shows/[showId]/rehearsal-plan/send": { roles: DIRECTORS, body: "json" },
+  "GET shows/[showId]/rehearsal-plans": { roles: ALL },
+  "POST shows/[showId]/rehearsal-plans": { roles: DIRECTORS, body: "json" },
+  "GET shows/[showId]/rehearsal-plans/[planId]": { roles: ALL },
+  // Staff mark items done during the rehearsal.
+  "PUT shows/[showId]/rehearsal-plans/[planId]/items/[itemKey]": { roles: ALL, body: "json" },
   "GET shows/[showId]/sheets": { roles: ALL },
   "GET shows/[showId]/sheets/pdf": { roles: ALL },
   "GET shows/[showId]/sheets/roster.csv": { roles: ALL },

@@ -21,10 +21,11 @@ describe("rehearsal plan", () => {
     for (let i = 1; i < items.length; i++) expect(items[i - 1].severity).toBeGreaterThanOrEqual(items[i].severity);
     for (const it of items) {
       const titles = it.buildUp.map((s: any) => s.title);
-      const order = ["Melody alone", "Add the countermelody", "Add accompaniment and bass", "Add percussion: full ensemble"];
+      // A phrase with a soloist opens with the soloist alone, then adds the melody.
+      const order = ["The soloist alone", "Melody alone", "Add the melody", "Add the countermelody", "Add accompaniment and bass", "Add percussion: full ensemble"];
       expect(titles).toEqual(order.filter((t) => titles.includes(t)));
     }
-    expect(res.body.listenFrom).toMatchObject({ name: "Press box", words: expect.stringContaining("in front of the front sideline") });
+    expect(res.body.listenFrom).toMatchObject({ name: "Press box", words: expect.stringMatching(/yards behind the front sideline, \d+ m up$/) });
   });
 
   it("gives each phrase the music page's plan: the same rows in score order, the same dynamics and the same words", async () => {

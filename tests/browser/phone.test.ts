@@ -61,4 +61,25 @@ describe("on a phone", () => {
     await page.screenshot({ path: path.join(SHOTS, "phone-performer.png"), fullPage: false });
     expect(problems).toEqual([]);
   }, 90_000);
+
+  it("lets staff mark a kept rehearsal plan's items done on the phone, and the mark is shared", async () => {
+    const { page, problems } = session;
+    const phrases = (await ids.director.get(`/api/shows/${ids.showId}/rehearsal-plan`)).body.phrases;
+    const kept = await ids.director.post(`/api/shows/${ids.showId}/rehearsal-plans`, { name: "At the stadium (phone)", choice: { phraseIds: phrases.slice(0, 2).map((p: any) => p.id), budgetMinutes: 20 } });
+    expect(kept.status).toBe(201);
+    await page.goto(`${APP_URL}/shows/${ids.showId}/rehearsal/plans/${kept.body.plan.id}`);
+    await page.getByRole("heading", { level: 1, name: "At the stadium (phone)" }).waitFor();
+    const first = page.locator('[data-item="item-1"]');
+    const button = first.getByRole("button", { name: "Mark done" });
+    const box = (await button.boundingBox())!;
+    expect(box.height).toBeGreaterThanOrEqual(44); // a thumb's target
+    expect(box.width).toBeGreaterThan(300);
+    await button.click();
+    await expect.poll(() => first.getAttribute("data-done")).toBe("yes");
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    await page.screenshot({ path: path.join(SHOTS, "phone-rehearsal-plan.png") });
+    const seen = (await ids.director.get(`/api/shows/${ids.showId}/rehearsal-plans/${kept.body.plan.id}`)).body.done;
+    expect(seen.map((d: any) => d.itemKey)).toEqual(["item-1"]);
+    expect(problems).toEqual([]);
+  }, 90_000);
 });

@@ -73,3 +73,13 @@ describe("buildRehearsalPlan with the phrase's plan", () => {
     expect(item!.unmet).toEqual(phrasePlan.unmet);
   });
 });
+
+describe("buildRehearsalPlan with a soloist", () => {
+  it("plays the soloist alone first, then adds the melody and the rest", () => {
+    const solo = { section: "Trumpets", who: "Trumpets soloist (T1)", why: "", writtenDynamic: "mf" as const, playedDynamic: "mf" as const, changeDb: 0, solo: true };
+    const [item] = buildRehearsalPlan([{ kind: "phrase", name: "Ballad", sets: [set("3", [pass("melody-forward")])], sections, plan: { entries: [solo], unmet: [] } }]);
+    expect(item!.buildUp[0]).toEqual({ step: 1, title: "The soloist alone", sections: ["Trumpets soloist (T1)"] });
+    expect(item!.buildUp[1]).toEqual({ step: 2, title: "Add the melody", sections: ["Trumpets"] });
+    expect(item!.buildUp).toHaveLength(5);
+  });
+});

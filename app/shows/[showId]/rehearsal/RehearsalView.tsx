@@ -1,11 +1,15 @@
 "use client";
-// The stadium rehearsal plan: choose phrases or sets, read them worst balance first with the build-up,
-// failing checks, dynamics to play and where to listen from; print it or e-mail it to staff.
+// The stadium rehearsal plan: choose phrases or sets and the minutes of stadium time, read them worst
+// balance first with each item's minutes, the build-up, failing checks, dynamics to play and where to
+// listen from; print it, e-mail it to staff, or keep it (kept plans are listed and reopened, and staff
+// mark items done on a phone at the rehearsal).
+import Link from "next/link";
 import { useEffect, useState } from "react";
 import { Breadcrumbs } from "@/components/Breadcrumbs";
 import { Button } from "@/components/Button";
 import { Card } from "@/components/Card";
 import { ErrorState } from "@/components/ErrorState";
+import { errorText } from "@/components/error-text";
 import { ApiError, sendJson } from "@/components/fetcher";
 import { FormMessage } from "@/components/FormMessage";
 import { NextStepNotice } from "@/components/NextStepNotice";
@@ -16,6 +20,8 @@ import { ShowNav } from "@/components/ShowNav";
 import type { Role } from "@/lib/auth/permissions";
 import { CHECK_LABELS } from "@/lib/music/check-labels";
 import type { RehearsalItem } from "@/lib/rehearsal/plan";
+import { setListWords } from "@/lib/show/set-words";
+import { BuildUpList } from "./BuildUpList";
 
 type Options = {
   show: { id: string; name: string };
@@ -25,7 +31,8 @@ type Options = {
   canSend: boolean;
   members: { userId: string; name: string; email: string; role: Role }[];
 };
-type Plan = { programName: string; listenFrom: { name: string; words: string }; items: RehearsalItem[] };
+type Plan = { programName: string; budgetMinutes: number; listenFrom: { name: string; words: string }; items: (RehearsalItem & { key: string; minutes: number })[] };
+type KeptList = { plans: { id: string; name: string; budgetMinutes: number; createdAt: string; createdBy: string | null; items: number; done: number }[] };
 
 const SOURCE_WORDS = { adopted: "adopted plan", proposed: "proposed", written: "as written" } as const;
 
@@ -38,8 +45,23 @@ export function RehearsalView({ showId, initial }: { showId: string; initial: { 
   const [status, setStatus] = useState<{ tone: "info" | "bad"; text: string } | null>(null);
   const [busy, setBusy] = useState(false);
   const [recipients, setRecipients] = useState<string[]>([]);
+  const [budget, setBudget] = useState("30");
+  const [planName, setPlanName] = useState("");
+  const kept = useApi<KeptList>(`/api/shows/${showId}/rehearsal-plans`);
 
-  const choice = () => ({ phraseIds, setIds, listeningPointId: pointId ?? options.data?.listeningPoints[0]?.id });
+  const choice = () => ({ phraseIds, setIds, listeningPointId: pointId ?? options.data?.listeningPoints[0]?.id, budgetMinutes: Number(budget) });
+  async function keep() {
+    setBusy(true);
+    try {
+      await sendJson(`/api/shows/${showId}/rehearsal-plans`, "POST", { name: planName, choice: choice() });
+      await kept.mutate();
+      setStatus({ tone: "info", text: `Kept as "${planName.trim()}". Staff open it under Kept plans and mark items done on their phones.` });
+    } catch (err) {
+      setStatus({ tone: "bad", text: errorText(err, "The plan could not be kept. Try again.") });
+    } finally {
+      setBusy(false);
+    }
+  }
   async function build() {
     setBusy(true);
     setStatus({ tone: "info", text: "Working out the plan…" });
@@ -47,7 +69,7 @@ export function RehearsalView({ showId, initial }: { showId: string; initial: { 
       setPlan(await sendJson<Plan>(`/api/shows/${showId}/rehearsal-plan`, "POST", choice()));
       setStatus(null);
     } catch (err) {
-      setStatus({ tone: "bad", text: err instanceof ApiError ? err.message : "The plan could not be made." });
+      setStatus({ tone: "bad", text: errorText(err, "The plan could not be made. Try again.") });
     } finally {
       setBusy(false);
     }
@@ -119,6 +141,11 @@ export function RehearsalView({ showId, initial }: { showId: string; initial: { 
                   </option>
                 ))}
               </select>
+              <label className="mt-4 block font-semibold text-ink" htmlFor="budget">
+                Stadium time (minutes)
+              </label>
+              <input id="budget" type="number" inputMode="numeric" min={1} max={600} step={1} className="mt-1 min-h-11 w-28 rounded-lg border border-ink/30 px-2 tabular-nums" value={budget} onChange={(e) => setBudget(e.target.value)} />
+              <p className="text-sm text-ink-soft">Shared among the items by how much each needs: a minute a build-up step, more where the balance is worse.</p>
               <div className="mt-4 flex gap-3">
                 <Button onClick={build} disabled={busy || phraseIds.length + setIds.length === 0}>
                   Make the plan
@@ -149,8 +176,37 @@ export function RehearsalView({ showId, initial }: { showId: string; initial: { 
                 <Button className="mt-3" onClick={send} disabled={busy || !plan || recipients.length === 0}>
                   E-mail the plan
                 </Button>
+                <div className="mt-5 border-t border-ink/10 pt-4">
+                  <label className="block font-semibold text-ink" htmlFor="plan-name">
+                    Keep this plan as
+                  </label>
+                  <input id="plan-name" className="mt-1 min-h-11 w-full rounded-lg border border-ink/30 px-2" placeholder="Thursday at the stadium" value={planName} onChange={(e) => setPlanName(e.target.value)} />
+                  <Button className="mt-2" variant="secondary" onClick={keep} disabled={busy || !plan || !planName.trim()}>
+                    Keep the plan
+                  </Button>
+                </div>
               </Card>
             ) : null}
+            <Card title="Kept plans" titleId="kept-title">
+              {!kept.data ? (
+                <p role="status">Loading the kept plans…</p>
+              ) : kept.data.plans.length === 0 ? (
+                <p className="text-ink-soft">No plan kept yet. A director keeps one after making it; staff then open it here at the rehearsal.</p>
+              ) : (
+                <ul className="divide-y divide-ink/10" data-testid="kept-plans">
+                  {kept.data.plans.map((p) => (
+                    <li key={p.id} className="py-2">
+                      <Link className="inline-flex min-h-11 items-center font-semibold text-turf-dark underline" href={`/shows/${showId}/rehearsal/plans/${p.id}`}>
+                        {p.name}
+                      </Link>
+                      <span className="block text-sm text-ink-soft">
+                        {p.budgetMinutes} minutes · {p.done} of {p.items} done{p.createdBy ? ` · kept by ${p.createdBy}` : ""}
+                      </span>
+                    </li>
+                  ))}
+                </ul>
+              )}
+            </Card>
           </div>
         )}
       </div>
@@ -168,10 +224,10 @@ function PlanSheets({ plan, showName }: { plan: Plan; showName: string }) {
             {plan.programName} · {showName} · stadium rehearsal, {i + 1} of {plan.items.length}
           </p>
           <h2 id={`item-${i}`} className="text-2xl font-bold text-ink">
-            {i + 1}. {it.name}
+            {i + 1}. {it.name} <span className="text-lg font-semibold text-ink-soft">· {it.minutes} {it.minutes === 1 ? "minute" : "minutes"}</span>
           </h2>
           <p className="text-ink-soft">
-            Sets {it.sets.join(", ")} · balance score {it.severity.toFixed(1)} (higher is worse)
+            {setListWords(it.sets)} · balance score {it.severity.toFixed(1)} (higher is worse)
           </p>
           <p className="mt-2 rounded-lg bg-paper-sunk p-2 text-sm">
             Listen from the <strong>{plan.listenFrom.name}</strong>: {plan.listenFrom.words}. Levels are predictions, not measurements; musicians near loud sections should wear hearing protection, and your school&apos;s and venue&apos;s rules come first.
@@ -179,19 +235,13 @@ function PlanSheets({ plan, showName }: { plan: Plan; showName: string }) {
           <div className="mt-4 grid gap-6 md:grid-cols-2 print:grid-cols-[5fr_6fr] print:gap-4">
             <div>
               <h3 className="font-semibold text-ink">Build up</h3>
-              <ol className="mt-1 list-decimal space-y-1 pl-5">
-                {it.buildUp.map((s) => (
-                  <li key={s.step}>
-                    <span className="font-semibold">{s.title}:</span> {s.sections.join(", ")}
-                  </li>
-                ))}
-              </ol>
+              <BuildUpList steps={it.buildUp} />
               <h3 className="mt-4 font-semibold text-ink">Checks that fail</h3>
               {it.failing.length ? (
                 <ul className="mt-1 space-y-2 text-sm">
                   {it.failing.map((f) => (
                     <li key={f.id}>
-                      <span className="font-semibold">{CHECK_LABELS[f.id]}</span> (sets {f.sets.join(", ")}): {f.detail}
+                      <span className="font-semibold">{CHECK_LABELS[f.id]}</span> ({setListWords(f.sets)}): {f.detail}
                     </li>
                   ))}
                 </ul>

@@ -7,11 +7,15 @@ import type { Show } from "@/db/schema";
 import { runPhrasePlan } from "@/lib/analysis/run-phrase-plan";
 import { loadShowBalance } from "@/lib/analysis/show-context";
 import { storedAnalysis } from "@/lib/analysis/stored-analysis";
-import { describePosition } from "@/lib/field/words";
+import { describeListeningPoint } from "@/lib/field/point-words";
 import { badRequest } from "@/lib/http/errors";
+import { shareMinutes } from "@/lib/rehearsal/budget";
 import { buildRehearsalPlan, type RehearsalItemInput, type SetAnalysis } from "@/lib/rehearsal/plan";
 import { UNASSIGNED, phraseAt } from "@/lib/music/voicing";
 import type { RehearsalChoice } from "@/lib/validation/rehearsal";
+
+/** Stadium time when the director gives none: half an hour (common practice, no source). */
+export const DEFAULT_BUDGET_MINUTES = 30;
 
 export async function assembleRehearsalPlan(show: Show, choice: RehearsalChoice) {
   const [sets, music, points, program] = await Promise.all([listSets(show.id), loadMusic(show.id), listListeningPoints(show.id), findProgram(show.programId)]);
@@ -64,12 +68,16 @@ export async function assembleRehearsalPlan(show: Show, choice: RehearsalChoice)
       plan: await planOf(phrase?.id),
     });
   }
-  const where = describePosition(point.x, point.y, show.fieldRules);
+  const budgetMinutes = choice.budgetMinutes ?? DEFAULT_BUDGET_MINUTES;
+  const built = buildRehearsalPlan(items);
+  const minutes = shareMinutes(built.map((it) => ({ severity: it.severity, buildUpSteps: it.buildUp.length })), budgetMinutes);
   return {
     programName: program?.name ?? "",
     show: { id: show.id, name: show.name },
-    listenFrom: { id: point.id, name: point.name, x: point.x, y: point.y, z: point.z, words: `${where.text}; ${point.z.toFixed(0)} m up` },
-    items: buildRehearsalPlan(items),
+    listenFrom: { id: point.id, name: point.name, x: point.x, y: point.y, z: point.z, words: describeListeningPoint(point.x, point.y, point.z, show.fieldRules) },
+    budgetMinutes,
+    // A key per item (its place in the plan) so a kept plan's items can be marked done.
+    items: built.map((it, i) => ({ ...it, key: `item-${i + 1}`, minutes: minutes[i]! })),
     unassigned: UNASSIGNED,
   };
 }
