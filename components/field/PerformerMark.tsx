@@ -7,8 +7,9 @@ import type { VoiceStyle } from "./palette";
 export function PerformerMark(props: {
   cx: number;
   cy: number;
-  /** Dot radius; the wedge reaches 2.6 of them. */
+  /** Dot radius; the wedge reaches `reach` of them (2.6 unless a crowded drawing asks for less). */
   r: number;
+  reach?: number;
   facingDeg: number;
   /** Null: the dot alone (a voice in a legend). */
   spreadDeg: number | null;
@@ -24,7 +25,7 @@ export function PerformerMark(props: {
   const width = props.dotStrokeWidth ?? r * 0.3;
   return (
     <g>
-      {props.spreadDeg === null ? null : <path d={wedgePath(cx, cy, props.facingDeg, props.spreadDeg, r * 2.6)} fill={style.colour} fillOpacity={0.3} stroke={style.colour} strokeOpacity={0.9} strokeWidth={r * 0.18} />}
+      {props.spreadDeg === null ? null : <path d={wedgePath(cx, cy, props.facingDeg, props.spreadDeg, r * (props.reach ?? 2.6))} fill={style.colour} fillOpacity={0.3} stroke={style.colour} strokeOpacity={0.9} strokeWidth={r * 0.18} />}
       <circle cx={cx} cy={cy} r={r} fill={fill} fillOpacity={props.dotFill || style.fillAlpha === 0 ? 1 : style.fillAlpha} stroke={stroke} strokeWidth={width} strokeDasharray={style.dash.length ? style.dash.map((d) => (d * r) / 4).join(" ") : undefined} />
       {style.ring ? <circle cx={cx} cy={cy} r={r * 1.45} fill="none" stroke="#1c2430" strokeWidth={r * 0.2} /> : null}
     </g>

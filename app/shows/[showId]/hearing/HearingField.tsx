@@ -87,6 +87,8 @@ export function HearingField({ performers, rules, standard, selectedId, onSelect
               cx={sx(p.x)}
               cy={sy(p.y)}
               r={DOT_R}
+              // Shorter wedges here: the level colour of the dot is what this map reads.
+              reach={1.9}
               facingDeg={p.facingDeg}
               spreadDeg={instrumentSpreadDeg(p.instrument)}
               style={VOICE_STYLES[(p.voice in VOICE_STYLES ? p.voice : "tacet") as VoiceOrTacet]}
