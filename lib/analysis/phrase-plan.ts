@@ -16,6 +16,10 @@ function summary(input: AnalysisInput, point: PointResult, targets: ShowBalance[
     totalDbA: point.totalDbA,
     voices: Object.fromEntries(Object.entries(point.voices).map(([v, l]) => [v, { dbA: l!.dbA }])),
     sections: Object.fromEntries(Object.entries(point.sections).map(([s, l]) => [s, { dbA: l.dbA }])),
+    // Loudness (ISO 532-1) of the band and each voice: what the music page reports per set.
+    loudness: point.loudness
+      ? { totalSone: point.loudness.totalSone, voices: Object.fromEntries(Object.entries(point.loudness.voices).map(([v, l]) => [v, { sone: l.sone, phon: l.phon, heard: l.heard }])) }
+      : null,
     checks: checkBalance(input, point, targets),
   };
 }

@@ -7,7 +7,7 @@ import { setInputs } from "./balance-inputs";
 import type { ShowBalance } from "./show-context";
 import { sweepTransition, type SweepSample } from "./sweep";
 
-export const SWEEP_VERSION = `${MODEL_VERSION}+${BALANCE_VERSION}+sweep-2`; // sweep-2: samples name the checks with nothing to judge
+export const SWEEP_VERSION = `${MODEL_VERSION}+${BALANCE_VERSION}+sweep-3`; // sweep-2: samples name the checks with nothing to judge; sweep-3: loudness in sones
 
 export interface SetSweep {
   setId: string;

@@ -8,6 +8,7 @@ import { findStoredAnalysis, findStoredResult, markAnalysisCurrent, storeAnalysi
 import { loadSetContext } from "@/db/queries/set-context";
 import type { Show } from "@/db/schema";
 import { analyzeSet, checkBalance, solveBalancePlan, toJsonSafe } from "@/lib/acoustics";
+import { sectionLoudness } from "@/lib/acoustics/analyze";
 import { checkConfidence, levelUncertainty } from "@/lib/acoustics/confidence";
 import type { MusicalLimits } from "@/lib/acoustics/plan-limits";
 import { BALANCE_VERSION } from "@/lib/acoustics/targets";
@@ -45,7 +46,8 @@ export function computeBalance(
   const confidence = checkConfidence(played, listeningPointId, targets, { point: pr, checks });
   return toJsonSafe({
     mix: { ...mixOf(pr), uncertainty: levelUncertainty(played, pr) },
-    loudness: pr.loudness,
+    // Per section as per voice (sone, phon, share, heard), for set compare and outside scripts.
+    loudness: { ...pr.loudness!, sections: sectionLoudness(played, pr) },
     checks: checks.map((c, n) => ({ ...c, confidence: confidence[n]!.confidence, sameInCases: confidence[n]!.sameInCases, cases: confidence[n]!.cases, turnedBy: confidence[n]!.turnedBy })),
     plan: plan.entries,
     planUnmet: plan.unmet,

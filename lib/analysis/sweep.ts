@@ -1,6 +1,7 @@
 // The transition sweep into a set: the box levels and the failing checks at every count from
 // the previous set, the performers moving in straight lines at an even step. Pure.
 import { checkBalance, createSetEvaluator, positionsBetweenInto, VOICES } from "@/lib/acoustics";
+import { loudnessOfPoint } from "@/lib/acoustics/analyze";
 import type { BalanceTargets } from "@/lib/acoustics/targets";
 import type { AnalysisInput, CheckId, Position } from "@/lib/acoustics/types";
 
@@ -9,6 +10,9 @@ export interface SweepSample {
   count: number;
   totalDbA: number | null;
   voices: Record<string, number | null>;
+  /** Loudness (ISO 532-1, sone) of the band and of each voice at the point; null where nothing sounds. */
+  totalSone: number | null;
+  voicesSone: Record<string, number | null>;
   failing: CheckId[];
   /** Checks with nothing to judge at this count (no melody, nobody sounding…): neither a pass nor a failure. */
   notApplicable?: CheckId[];
@@ -44,11 +48,17 @@ export function sweepTransition(to: AnalysisInput, fromPositions: readonly Posit
     for (const point of result.points) {
       const voices: Record<string, number | null> = {};
       for (const v of VOICES) voices[v] = finite(point.voices[v]?.dbA ?? -Infinity);
+      // Computed once here and read again by the checks (heard at the box).
+      point.loudness = loudnessOfPoint(input, point, to.listeningPoints.find((l) => l.id === point.listeningPointId)?.background);
+      const voicesSone: Record<string, number | null> = {};
+      for (const v of VOICES) voicesSone[v] = point.loudness.voices[v]?.sone ?? null;
       const checks = checkBalance(input, point, targets);
       out[point.listeningPointId]!.push({
         count,
         totalDbA: finite(point.totalDbA),
         voices,
+        totalSone: Number.isFinite(point.totalDbA) ? point.loudness.totalSone : null,
+        voicesSone,
         failing: checks.filter((c) => !c.passed).map((c) => c.id),
         notApplicable: checks.filter((c) => c.status === "not-applicable").map((c) => c.id),
       });

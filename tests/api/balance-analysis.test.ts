@@ -86,6 +86,14 @@ describe("GET analysis: loudness at the listening point", () => {
       expect(v.shareSone).toBeGreaterThanOrEqual(0);
       expect(v.shareSone).toBeLessThanOrEqual(loudness.totalSone);
     }
+    // Per section too (additive): every section that sounds, with its sones, phons, share and whether it is heard.
+    const sounding = Object.entries<any>(mix.sections).filter(([, l]) => l.dbA !== null).map(([name]) => name);
+    expect(Object.keys(loudness.sections).sort()).toEqual(sounding.sort());
+    for (const s of Object.values<any>(loudness.sections)) {
+      expect(Object.keys(s).sort()).toEqual(["heard", "marginDb", "phon", "shareSone", "sone"]);
+      expect(s.sone).toBeGreaterThan(0);
+      expect(s.shareSone).toBeLessThanOrEqual(loudness.totalSone);
+    }
     // The existing fields stay as they were.
     expect(typeof mix.totalDbA).toBe("number");
     expect(res.body.checks).toHaveLength(8); // shared/API.md's six, then battery-balance and heard-at-box

@@ -78,6 +78,9 @@ describe("phrase plan", () => {
     for (const s of proposal.sets) {
       const a = await copy.client.get(`/api/shows/${copy.showId}/sets/${s.setId}/analysis?listeningPointId=${copy.pressBoxId}`);
       expect(a.body.mix.voices.melody.dbA).toBeCloseTo(s.before.voices.melody.dbA, 6);
+      // The music page's "Melody forward, set by set" speaks of loudness: the same sones as the set's analysis.
+      expect(s.before.loudness.voices.melody.sone).toBeCloseTo(a.body.loudness.voices.melody.sone, 6);
+      expect(s.before.loudness.voices.melody.phon).toBeCloseTo(a.body.loudness.voices.melody.phon, 6);
     }
   });
 });

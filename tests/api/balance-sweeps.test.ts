@@ -29,6 +29,9 @@ describe("timeline", () => {
     expect(last.count).toBe(seven.counts);
     const analysis = await staff.get(`/api/shows/${ids.showId}/sets/${seven.id}/analysis?${q()}`);
     expect(last.voices.melody).toBeCloseTo(analysis.body.mix.voices.melody.dbA, 6);
+    // Loudness in sones too (the timeline's "Loudness (sones)" option), as the set's analysis gives it.
+    expect(last.voicesSone.melody).toBeCloseTo(analysis.body.loudness.voices.melody.sone, 6);
+    expect(last.totalSone).toBeCloseTo(analysis.body.loudness.totalSone, 6);
     expect(last.failing).toEqual(analysis.body.checks.filter((c: any) => !c.passed).map((c: any) => c.id));
     const again = await staff.get(`/api/shows/${ids.showId}/timeline?${q()}`);
     expect(again.body.recomputed).toBe(0);
@@ -72,6 +75,12 @@ describe("sweep and compare", () => {
     for (const v of res.body.changes.voices) {
       if (v.aDbA !== null && v.bDbA !== null) expect(v.changeDb).toBeCloseTo(mb.voices[v.voice].dbA - ma.voices[v.voice].dbA, 9);
       expect(v.flagged).toBe(v.changeDb === null || Math.abs(v.changeDb) > res.body.changes.setChangeDb);
+    }
+    // Each side carries its loudness per voice and per section, as its analysis answers it (the compare bars).
+    for (const [side, setNumber] of [[res.body.a, "6"], [res.body.b, "7"]] as const) {
+      const analysis = (await staff.get(`/api/shows/${ids.showId}/sets/${setOf(setNumber).id}/analysis?${q()}`)).body;
+      expect(side.loudness).toEqual(analysis.loudness);
+      expect(Object.keys(side.loudness.sections).length).toBeGreaterThan(3);
     }
     // Set 6 is the loud impact, set 7 the quiet clarinet song: the melody falls far more than 3 dB.
     expect(res.body.changes.voices.find((v: any) => v.voice === "melody").flagged).toBe(true);

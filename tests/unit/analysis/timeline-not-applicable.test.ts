@@ -3,6 +3,7 @@
 import { describe, expect, it } from "vitest";
 import { CHECK_IDS } from "@/lib/acoustics/types";
 import { DEFAULT_TARGETS } from "@/lib/acoustics/targets";
+import { analyzeSet } from "@/lib/acoustics";
 import { sweepTransition } from "@/lib/analysis/sweep";
 import { showTimeline } from "@/lib/analysis/timeline";
 import { AIR, BOX, performer } from "../acoustics/helpers";
@@ -25,5 +26,18 @@ describe("the timeline's checks", () => {
     expect(tacet[0]!.failing).not.toContain("melody-forward");
     const playing = sweepTransition(band("melody"), null, 0, DEFAULT_TARGETS).box!;
     expect(playing[0]!.notApplicable).not.toContain("melody-forward");
+  });
+});
+
+describe("the timeline's loudness (sones)", () => {
+  it("gives each sample the band's and each voice's loudness, as the set's analysis gives them at its last count; null for a voice no one plays", () => {
+    const sample = sweepTransition(band("melody"), null, 0, DEFAULT_TARGETS).box![0]!;
+    const loudness = analyzeSet(band("melody")).points[0]!.loudness!;
+    expect(sample.totalSone).toBeCloseTo(loudness.totalSone, 9);
+    expect(sample.voicesSone.melody).toBeCloseTo(loudness.voices.melody!.sone, 9);
+    expect(sample.voicesSone.bass).toBeCloseTo(loudness.voices.bass!.sone, 9);
+    expect(sample.voicesSone.countermelody).toBeNull();
+    const silent = sweepTransition(band("tacet"), null, 0, DEFAULT_TARGETS).box![0]!;
+    expect(silent.totalSone).toBeNull();
   });
 });

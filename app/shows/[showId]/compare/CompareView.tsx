@@ -10,12 +10,19 @@ import { PageTitle } from "@/components/PageTitle";
 import { SkeletonCard } from "@/components/Skeleton";
 import { apiKeys, useApi } from "@/components/use-api";
 import { ShowNav } from "@/components/ShowNav";
-import { CHECK_LABELS, VOICE_LABELS, formatDb } from "../music/voices";
+import { CHECK_LABELS, VOICE_LABELS, VOICE_ORDER, formatDb, formatSone } from "../music/voices";
+import { LoudnessBars, type LoudnessRow } from "./LoudnessBars";
 import { MiniField } from "@/components/MiniField";
 import { SpreadLegend } from "@/components/field/Legend";
 import { instrumentSpreadDeg } from "@/lib/field/marks";
 
-type Side = { set: { id: string; number: string }; mix: { totalDbA: number | null }; checks: { id: string; passed: boolean; status?: string }[] };
+type Loud = { sone: number; phon: number; shareSone: number; heard: boolean };
+type Side = {
+  set: { id: string; number: string };
+  mix: { totalDbA: number | null };
+  loudness?: { totalSone: number; voices: Record<string, Loud>; sections?: Record<string, Loud> };
+  checks: { id: string; passed: boolean; status?: string }[];
+};
 type CompareResponse = {
   a: Side;
   b: Side;
@@ -51,6 +58,11 @@ export function CompareView({ showId, initialA, initialB }: { showId: string; in
   const changed = new Set((c?.changes.performers ?? []).slice(0, 5).map((p) => p.performerId));
   const instrumentOf = new Map(show.data.performers.map((p) => [p.id, p.instrument]));
   const marks = (positions: SetResponse["positions"]) => positions.map((p) => ({ ...p, spreadDeg: instrumentSpreadDeg(instrumentOf.get(p.performerId) ?? "") }));
+  // Loudness rows of the two sets: every voice or section sounding in either.
+  const rowsOf = (pick: (s: Side) => Record<string, Loud> | undefined, names: string[], label: (k: string) => string): LoudnessRow[] =>
+    !c ? [] : names.filter((k) => pick(c.a)?.[k] || pick(c.b)?.[k]).map((k) => ({ key: k, name: label(k), a: pick(c.a)?.[k]?.sone ?? null, b: pick(c.b)?.[k]?.sone ?? null, heardA: pick(c.a)?.[k]?.heard ?? null, heardB: pick(c.b)?.[k]?.heard ?? null }));
+  const voiceRows = rowsOf((s) => s.loudness?.voices, [...VOICE_ORDER], (v) => VOICE_LABELS[v] ?? v);
+  const sectionRows = rowsOf((s) => s.loudness?.sections, c ? [...new Set([...Object.keys(c.a.loudness?.sections ?? {}), ...Object.keys(c.b.loudness?.sections ?? {})])] : [], (s) => s);
   return (
     <>
       <Breadcrumbs items={crumbs} />
@@ -67,7 +79,7 @@ export function CompareView({ showId, initialA, initialB }: { showId: string; in
           <SpreadLegend />
           <div className="grid gap-6 md:grid-cols-2">
             {([c.a, c.b] as Side[]).map((side, i) => (
-              <Card key={side.set.id} title={`Set ${side.set.number}: ${formatDb(side.mix.totalDbA)} dBA`} titleId={`side-${i}`}>
+              <Card key={side.set.id} title={`Set ${side.set.number}: ${formatDb(side.mix.totalDbA)} dBA, ${formatSone(side.loudness?.totalSone)} sones`} titleId={`side-${i}`}>
                 <MiniField dots={marks((i === 0 ? fieldA : fieldB).data?.positions ?? [])} highlight={changed} title={`Field at set ${side.set.number}; the players whose contribution changed most are larger and orange`} />
                 <ul className="mt-3 flex flex-wrap gap-2 text-sm">
                   {side.checks.map((k) => k.status === "not-applicable" ? (
@@ -79,6 +91,15 @@ export function CompareView({ showId, initialA, initialB }: { showId: string; in
               </Card>
             ))}
           </div>
+          <div className="grid items-start gap-6 lg:grid-cols-2">
+            <Card title="Loudness per voice (sones)" titleId="voice-loudness-title">
+              <LoudnessBars rows={voiceRows} setA={c.a.set.number} setB={c.b.set.number} caption="Loudness of each voice at the listening point, in sones" />
+            </Card>
+            <Card title="Loudness per section (sones)" titleId="section-loudness-title">
+              <LoudnessBars rows={sectionRows} setA={c.a.set.number} setB={c.b.set.number} caption="Loudness of each section at the listening point, in sones" />
+            </Card>
+          </div>
+          <p className="text-sm text-ink-soft">Loudness as people hear it (ISO 532-1): twice the sones sounds twice as loud. A voice or section marked “masked” is covered by the rest of the band and the background.</p>
           <Card title="Voices" titleId="voices-title">
             <table className="w-full text-left">
               <thead><tr className="border-b border-ink/15 text-sm text-ink-soft"><th className="py-2 pr-3">Voice</th><th className="py-2 pr-3">Set {c.a.set.number}</th><th className="py-2 pr-3">Set {c.b.set.number}</th><th className="py-2 pr-3">Change</th><th className="py-2">Flag</th></tr></thead>

@@ -9,7 +9,7 @@ import { sendJson } from "@/components/fetcher";
 import { useApi } from "@/components/use-api";
 import { LimitsForm } from "./LimitsForm";
 import type { MusicPhrase, PhrasePlanResponse } from "./music-types";
-import { CHECK_LABELS, formatDb } from "./voices";
+import { CHECK_LABELS, formatDb, formatSone } from "./voices";
 
 export function PlanPanel({ showId, phrase, canAdopt, listeningPoints }: { showId: string; phrase: MusicPhrase; canAdopt: boolean; listeningPoints: ListeningPoint[] }) {
   const [pointId, setPointId] = useState(listeningPoints[0]?.id ?? "");
@@ -93,7 +93,7 @@ export function PlanPanel({ showId, phrase, canAdopt, listeningPoints }: { showI
               return (
                 <li key={s.setId} className="text-sm">
                   <span className="font-semibold">Set {s.number}:</span> as played now{" "}
-                  <Verdict check={b} /> melody {formatDb(s.before.voices.melody?.dbA)} dBA → with the plan <Verdict check={a} /> melody {formatDb(s.after.voices.melody?.dbA)} dBA
+                  <Verdict check={b} /> melody <MelodyLoudness mix={s.before} /> → with the plan <Verdict check={a} /> melody <MelodyLoudness mix={s.after} />
                 </li>
               );
             })}
@@ -111,6 +111,17 @@ export function PlanPanel({ showId, phrase, canAdopt, listeningPoints }: { showI
         </>
       )}
     </Card>
+  );
+}
+
+/** The melody's loudness in a set (sones and phons, ISO 532-1), and whether it is heard at all. */
+function MelodyLoudness({ mix }: { mix: { loudness?: { voices: Record<string, { sone: number; phon: number; heard: boolean }> } | null } }) {
+  const m = mix.loudness?.voices.melody;
+  if (!m) return <span className="text-ink-soft">not playing</span>;
+  return (
+    <span className="tabular-nums">
+      {formatSone(m.sone)} sones ({m.phon.toFixed(0)} phon){m.heard ? "" : ", masked"}
+    </span>
   );
 }
 

@@ -29,7 +29,14 @@ export type PlanEntryDto = {
   unreachable?: string[];
 };
 export type PlanLimits = { windSteps: number; percussionSteps: number; keepShape: boolean };
-export type MixSummary = { totalDbA: number | null; voices: Record<string, { dbA: number | null }>; sections: Record<string, { dbA: number | null }>; checks: CheckDto[] };
+export type MixSummary = {
+  totalDbA: number | null;
+  voices: Record<string, { dbA: number | null }>;
+  sections: Record<string, { dbA: number | null }>;
+  /** Loudness (ISO 532-1) of the band and each voice. */
+  loudness: { totalSone: number; voices: Record<string, { sone: number; phon: number; heard: boolean }> } | null;
+  checks: CheckDto[];
+};
 export type PhrasePlanResponse = {
   phrase: { id: string; name: string };
   listeningPointId: string;

@@ -24,3 +24,9 @@ export function formatDb(db: number | null | undefined, signed = false): string 
   const s = (Math.abs(db) < 0.05 ? 0 : db).toFixed(1);
   return signed && db > 0 ? `+${s}` : s;
 }
+
+/** Loudness in sones to one decimal (whole sones from 100 up); "—" for none. */
+export function formatSone(sone: number | null | undefined): string {
+  if (sone === null || sone === undefined || !Number.isFinite(sone)) return "—";
+  return sone >= 100 ? sone.toFixed(0) : sone.toFixed(1);
+}

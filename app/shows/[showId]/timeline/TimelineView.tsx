@@ -12,8 +12,8 @@ import { PageTitle } from "@/components/PageTitle";
 import { SkeletonCard } from "@/components/Skeleton";
 import { apiKeys, useApi } from "@/components/use-api";
 import { ShowNav } from "@/components/ShowNav";
-import { CHECK_LABELS, VOICE_LABELS, formatDb } from "../music/voices";
-import type { TimelineResponse, TimelineSample } from "./timeline-types";
+import { CHECK_LABELS, VOICE_LABELS, formatDb, formatSone } from "../music/voices";
+import type { Measure, TimelineResponse, TimelineSample } from "./timeline-types";
 import { VoiceChart } from "./VoiceChart";
 
 const CHECKS = Object.keys(CHECK_LABELS);
@@ -24,6 +24,7 @@ export function TimelineView({ showId }: { showId: string }) {
   const lp = pointId ?? show.data?.listeningPoints[0]?.id ?? null;
   const timeline = useApi<TimelineResponse>(lp ? `/api/shows/${encodeURIComponent(showId)}/timeline?listeningPointId=${lp}` : null);
   const [shade, setShade] = useState<string>("melody-forward");
+  const [measure, setMeasure] = useState<Measure>("dba");
   const [sweepSetId, setSweepSetId] = useState<string | null>(null);
   const [picked, setPicked] = useState<TimelineSample | null>(null);
   const crumbs = [
@@ -52,7 +53,7 @@ export function TimelineView({ showId }: { showId: string }) {
       <Breadcrumbs items={crumbs} />
       <ShowNav showId={showId} />
       <PageTitle
-        sub="Each voice's predicted level at the listening point, count by count. Predictions are estimates, not measurements."
+        sub="Each voice's predicted level (dBA) or loudness (sones, as people hear it) at the listening point, count by count. Predictions are estimates, not measurements."
         aside={
           <label className="flex items-center gap-2">
             Listening point
@@ -70,19 +71,34 @@ export function TimelineView({ showId }: { showId: string }) {
           title="Voices at the listening point"
           titleId="voices-title"
           action={
+            <div className="flex flex-wrap items-center gap-3">
+            <label className="flex items-center gap-2 text-sm">
+              Show
+              <select className="min-h-11 rounded-lg border border-ink-soft/40 bg-paper-raised px-2" value={measure} onChange={(e) => setMeasure(e.target.value as Measure)}>
+                <option value="dba">Level (dBA)</option>
+                <option value="sone">Loudness (sones)</option>
+              </select>
+            </label>
             <label className="flex items-center gap-2 text-sm">
               Shade where this check fails
               <select className="min-h-11 rounded-lg border border-ink-soft/40 bg-paper-raised px-2" value={shade} onChange={(e) => setShade(e.target.value)}>
                 {CHECKS.map((c) => <option key={c} value={c}>{CHECK_LABELS[c]}</option>)}
               </select>
             </label>
+            </div>
           }
         >
-          <VoiceChart samples={t.samples} sets={t.sets} failingCheck={shade} onPick={(s) => { setPicked(s); setSweepSetId(s.setId); }} />
-          <p className="mt-2 text-sm text-ink-soft">Dashed lines mark the sets; shaded counts fail “{CHECK_LABELS[shade]}”. Click the chart to pick a count.</p>
+          <VoiceChart samples={t.samples} sets={t.sets} failingCheck={shade} measure={measure} onPick={(s) => { setPicked(s); setSweepSetId(s.setId); }} />
+          <p className="mt-2 text-sm text-ink-soft">
+            {measure === "sone" ? "Loudness in sones (ISO 532-1): twice the sones sounds twice as loud. " : "A-weighted levels in dBA. "}
+            Dashed lines mark the sets; shaded counts fail “{CHECK_LABELS[shade]}”. Click the chart to pick a count.
+          </p>
           {picked ? (
             <p className="mt-2" aria-live="polite">
-              Count {picked.count} into set {picked.setNumber}: melody {formatDb(picked.voices.melody)} dBA, band {formatDb(picked.totalDbA)} dBA.{" "}
+              Count {picked.count} into set {picked.setNumber}:{" "}
+              {measure === "sone"
+                ? `melody ${formatSone(picked.voicesSone?.melody)} sones, band ${formatSone(picked.totalSone)} sones.`
+                : `melody ${formatDb(picked.voices.melody)} dBA, band ${formatDb(picked.totalDbA)} dBA.`}{" "}
               <Link className="font-semibold text-turf-dark underline" href={setHref(picked.setId, picked.count)}>See the field at this count</Link>
             </p>
           ) : null}
@@ -153,7 +169,7 @@ export function TimelineView({ showId }: { showId: string }) {
             </label>
           }
         >
-          <VoiceChart samples={sweepSamples.map((s) => ({ ...s, showCount: s.count }))} sets={[]} failingCheck={shade} height={260} onPick={(s) => setPicked(s)} />
+          <VoiceChart samples={sweepSamples.map((s) => ({ ...s, showCount: s.count }))} sets={[]} failingCheck={shade} measure={measure} height={260} onPick={(s) => setPicked(s)} />
           <div className="mt-2 flex flex-wrap gap-1" aria-label="Counts of the transition">
             {sweepSamples.map((s) => (
               <Link

@@ -1,14 +1,16 @@
 "use client";
-// Voice levels at the listening point against counts, with the sets marked; a click picks the nearest count.
+// Voice levels (dBA) or loudness (sones) at the listening point against counts, with the sets marked; a click picks the nearest count.
 import { CartesianGrid, Legend, Line, LineChart, ReferenceArea, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { VOICE_COLORS, VOICE_LABELS } from "../music/voices";
-import type { TimelineSample, TimelineSet } from "./timeline-types";
+import type { Measure, TimelineSample, TimelineSet } from "./timeline-types";
 
 const VOICES = ["melody", "countermelody", "accompaniment", "bass", "percussion"];
 
-export function VoiceChart({ samples, sets, failingCheck, onPick, height = 360 }: { samples: TimelineSample[]; sets: TimelineSet[]; failingCheck: string | null; onPick?: (s: TimelineSample) => void; height?: number }) {
-  const data = samples.map((s) => ({ x: s.showCount, ...s.voices, sample: s }));
-  const present = VOICES.filter((v) => samples.some((s) => s.voices[v] !== null));
+export function VoiceChart({ samples, sets, failingCheck, onPick, height = 360, measure = "dba" }: { samples: TimelineSample[]; sets: TimelineSet[]; failingCheck: string | null; onPick?: (s: TimelineSample) => void; height?: number; measure?: Measure }) {
+  const valuesOf = (s: TimelineSample) => (measure === "sone" ? (s.voicesSone ?? {}) : s.voices);
+  const unit = measure === "sone" ? " sone" : " dBA";
+  const data = samples.map((s) => ({ x: s.showCount, ...valuesOf(s), sample: s }));
+  const present = VOICES.filter((v) => samples.some((s) => valuesOf(s)[v] != null));
   // Runs of counts where the chosen check fails, shaded.
   const runs: { x1: number; x2: number }[] = [];
   if (failingCheck) {
@@ -33,10 +35,10 @@ export function VoiceChart({ samples, sets, failingCheck, onPick, height = 360 }
         >
           <CartesianGrid strokeDasharray="3 3" stroke="#d9d7cf" />
           <XAxis dataKey="x" type="number" domain={["dataMin", "dataMax"]} tickCount={12} label={{ value: "Count", position: "insideBottomRight", offset: -4 }} />
-          <YAxis unit=" dBA" width={72} domain={["auto", "auto"]} />
+          <YAxis unit={unit} width={76} domain={measure === "sone" ? [0, "auto"] : ["auto", "auto"]} />
           {runs.map((r) => <ReferenceArea key={`${r.x1}-${r.x2}`} x1={r.x1} x2={r.x2} fill="#a3242b" fillOpacity={0.12} />)}
           {sets.map((s) => <ReferenceLine key={s.setId} x={s.showCount} stroke="#8a94a3" strokeDasharray="2 4" label={{ value: s.number, position: "top", fontSize: 11, fill: "#4a5566" }} />)}
-          <Tooltip formatter={(v, name) => [typeof v === "number" ? `${v.toFixed(1)} dBA` : "—", VOICE_LABELS[String(name)] ?? name]} labelFormatter={(x) => `Count ${x}`} />
+          <Tooltip formatter={(v, name) => [typeof v === "number" ? `${v.toFixed(1)}${unit}` : "—", VOICE_LABELS[String(name)] ?? name]} labelFormatter={(x) => `Count ${x}`} />
           <Legend formatter={(v) => VOICE_LABELS[String(v)] ?? v} />
           {present.map((v) => <Line key={v} type="monotone" dataKey={v} stroke={VOICE_COLORS[v]} strokeWidth={v === "melody" ? 3 : 2} dot={false} connectNulls={false} isAnimationActive={false} />)}
         </LineChart>

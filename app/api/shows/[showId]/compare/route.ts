@@ -31,7 +31,7 @@ export const GET = route<{ showId: string }>(async (req, { showId }) => {
   if (!setB) throw notFound(q.b ? "No such set." : "This is the last set: there is no next one to compare with.");
   const [a, b, roster] = await Promise.all([storedAnalysis(show, setA, q.listeningPointId), storedAnalysis(show, setB, q.listeningPointId), listPerformers(showId)]);
   const labels = new Map(roster.map((p) => [p.id, { label: p.label, section: p.section }]));
-  const side = (set: typeof setA, r: typeof a) => ({ set: { id: set.id, number: set.number, counts: set.counts }, mix: r.result.mix, checks: r.result.checks });
+  const side = (set: typeof setA, r: typeof a) => ({ set: { id: set.id, number: set.number, counts: set.counts }, mix: r.result.mix, loudness: r.result.loudness, checks: r.result.checks });
   return NextResponse.json({
     listeningPointId: q.listeningPointId,
     a: side(setA, a),
