@@ -65,7 +65,7 @@ export interface Residual {
   key: string;
   /** The set it is measured in ("" for a single unnamed set). */
   set: string;
-  /** The state in a director's words at the raw value c + Σ coef · L: "the melody is 6 dB under the accompaniment". */
+  /** The state in a director's words at the raw value c + Σ coef · L: "the melody is 6 dB under the accompaniment in loudness". */
   state: (rawDb: number) => string;
   /** What the target asks: "it should lead every other voice by 3 dB". */
   aim: string;
@@ -245,7 +245,7 @@ export function buildPlanModel(
           // raw = lead target − (melody − voice)
           state: (raw) => {
             const lead = t.melodyLeadDb - raw;
-            return lead < 0 ? `the melody is ${dbWords(-lead)} under the ${v}` : `the melody leads the ${v} by only ${dbWords(lead)}`;
+            return lead < 0 ? `the melody is ${dbWords(-lead)} under the ${v} in loudness` : `the melody leads the ${v} by only ${dbWords(lead)} in loudness`;
           },
           aim: `the melody should lead every other wind voice by ${dbWords(t.melodyLeadDb)}`,
           units: [...groupUnits(gm), ...groupUnits(gv)],
@@ -266,7 +266,7 @@ export function buildPlanModel(
         key: "battery",
         set,
         // raw = (battery − winds) − allowance
-        state: (raw) => `the battery is ${dbWords(raw + t.batteryOverWindsDb)} over the winds`,
+        state: (raw) => `the battery is ${dbWords(raw + t.batteryOverWindsDb)} over the winds in loudness`,
         aim: `the battery should sit at most ${dbWords(t.batteryOverWindsDb)} over the winds`,
         units: [...groupUnits(gb), ...groupUnits(gw)],
       });
@@ -288,7 +288,7 @@ export function buildPlanModel(
           key: `pyramid:${scope}:${low.r}:${high.r}`,
           set,
           // raw = (high − low) − tolerance
-          state: (raw) => `${where}, the ${low.r} register is ${dbWords(raw + t.pyramidToleranceDb)} under the ${high.r}`,
+          state: (raw) => `${where}, the ${low.r} register is ${dbWords(raw + t.pyramidToleranceDb)} under the ${high.r} in loudness`,
           aim: "the lower voices should be at least as present as the higher ones",
           units: [...groupUnits(low.g), ...groupUnits(high.g)],
         });

@@ -32,7 +32,7 @@ export interface PlanEntryDetail extends PlanEntry {
 
 /** What a change serves, in a director's words (the words layer adds the listening point and the section). */
 export type PlanReason =
-  | { kind: TargetKind; key: string; /** As written: "the melody is 6 dB under the accompaniment". */ state: string; aim: string; set: string }
+  | { kind: TargetKind; key: string; /** As written: "the melody is 6 dB under the accompaniment in loudness". */ state: string; aim: string; set: string }
   /** The change keeps the written shape with the sections that move for a target. */
   | { kind: "shape" };
 

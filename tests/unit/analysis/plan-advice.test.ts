@@ -37,7 +37,7 @@ describe("advisePlan", () => {
     expect(under).toBeGreaterThan(1);
     expect(clarinets.playedDynamic).not.toBe("p");
     expect(clarinets.why).toBe(
-      `Clarinets: play ${clarinets.playedDynamic} where p is written — clarinets carry poorly outdoors, and the melody is ${Math.round(under)} dB under the accompaniment at the Press box.${clarinets.atLimit ? ` It stops at ${clarinets.atLimit}: the limits allow 2 steps from p.` : ""}`,
+      `Clarinets: play ${clarinets.playedDynamic} where p is written — clarinets carry poorly outdoors, and the melody is ${Math.round(under)} dB under the accompaniment in loudness at the Press box.${clarinets.atLimit ? ` It stops at ${clarinets.atLimit}: the limits allow 2 steps from p.` : ""}`,
     );
   });
 
