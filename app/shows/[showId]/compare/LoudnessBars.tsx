@@ -19,7 +19,7 @@ export function LoudnessBars({ rows, setA, setB, caption }: { rows: LoudnessRow[
           <BarChart data={data} layout="vertical" margin={{ top: 8, right: 24, bottom: 8, left: 8 }}>
             <CartesianGrid strokeDasharray="3 3" stroke="#d9d7cf" />
             <XAxis type="number" unit=" sone" domain={[0, "auto"]} />
-            <YAxis type="category" dataKey="name" width={120} />
+            <YAxis type="category" dataKey="name" width={136} />
             <Tooltip formatter={(v) => `${formatSone(typeof v === "number" ? v : null)} sone`} />
             <Legend />
             <Bar dataKey="a" name={`Set ${setA}`} fill={SET_COLORS[0]} isAnimationActive={false} />
