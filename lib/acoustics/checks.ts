@@ -96,8 +96,10 @@ function bassUpPyramid(players: BoxPlayer[], t: BalanceTargets, phon: Phon): Che
   }
   // Across the band, the bass register carries every register above it.
   // Across the band only where both choirs play the harmony (else it is the one choir again).
-  const band = new Set(harmony.map((p) => p.family)).size > 1 ? registers(harmony) : [];
-  if (band[0]?.register === "bass") for (const high of band.slice(1)) check("across the band", band[0], high);
+  if (new Set(harmony.map((p) => p.family)).size > 1) {
+    const band = registers(harmony);
+    if (band[0]?.register === "bass") for (const high of band.slice(1)) check("across the band", band[0], high);
+  }
   if (!judged) return notApplicable("bass-up-pyramid", "No two registers of winds play the harmony here.");
   if (failures.length === 0) {
     return pass("bass-up-pyramid", `Every lower register is at least as loud as the higher ones, in each choir and across the band (tolerance ${formatDb(t.pyramidToleranceDb)}).`);

@@ -232,3 +232,47 @@ describe("heard-at-box's words", () => {
     expect(c.detail).toMatch(sentence(String.raw`Masked by the rest of the band: the melody \(flutes, ${DB} over its masked threshold\) \(margin asked: 20\.0 dB\)\.`));
   });
 });
+
+describe("the checks' words when more than one thing fails", () => {
+  it("bass-up-pyramid in one choir says it once, with nothing across the band", () => {
+    const brass = [...row("T", 4, 12, { voice: "accompaniment", dynamic: "ff" }), ...row("U", 2, 12, { instrument: "tuba", section: "tubas", voice: "bass", dynamic: "pp" }, 10)];
+    expect(check(brass, "bass-up-pyramid").detail).toMatch(sentence(String.raw`In the brass, the bass register \(tubas\) is ${DB} under the soprano \(trumpets\) in loudness \(tolerance 3\.0 dB\)\.`));
+  });
+
+  it("depth-support joins two instruments' failures with a semicolon", () => {
+    const rank = (prefix: string, y: number, over: Partial<PerformerInput>, turned: boolean) =>
+      row(prefix, 3, y, over, -2).map((p) => (turned ? { ...p, facingDeg: 180 } : p));
+    const band = [...rank("N", 2, {}, false), ...rank("F", 40, {}, true), ...rank("M", 4, { instrument: "mellophone", section: "mellophones" }, false), ...rank("G", 42, { instrument: "mellophone", section: "mellophones" }, true)];
+    expect(check(band, "depth-support").detail).toMatch(
+      sentence(String.raw`Trumpet: the 3 players farther from the listening point are ${DB} thinner each than distance explains; Mellophone: the 3 players farther from the listening point are ${DB} thinner each than distance explains \(tolerance 3\.0 dB; they need to play out, or face the box\)\.`),
+    );
+  });
+
+  it("wide-form-edges joins two sections' failures with a semicolon", () => {
+    const line = (prefix: string, y: number, over: Partial<PerformerInput>) =>
+      [-25, -20, -2, 0, 2, 20, 25].map((x, k) => at({ id: `${prefix}${k}`, x, y, strengthDb: Math.abs(x) > 15 ? 6 : 0, ...over }));
+    const band = [...line("T", 10, { section: "trumpets" }), ...line("M", 14, { instrument: "mellophone", section: "mellophones" })];
+    expect(check(band, "wide-form-edges").detail).toMatch(
+      sentence(String.raw`The form spans 55 yd: the 4 players of the trumpets at the ends are ${DB} louder each than their section's centre; the 4 players of the mellophones at the ends are ${DB} louder each than their section's centre \(tolerance 2\.0 dB\)\. The end players should back off\.`),
+    );
+  });
+
+  it("heard-at-box joins masked voices with a semicolon, and asks no margin when the margin asked is 0", () => {
+    const band = [
+      ...row("T", 8, 10, { dynamic: "ff" }),
+      ...row("F", 2, 14, { instrument: "flute", section: "flutes", voice: "countermelody", dynamic: "pp" }),
+      ...row("C", 2, 16, { instrument: "clarinet", section: "clarinets", voice: "accompaniment", dynamic: "pp" }),
+    ];
+    expect(check(band, "heard-at-box", { heardMarginDb: 0 }).detail).toMatch(
+      sentence(String.raw`Masked by the rest of the band: the countermelody \(flutes, ${DB} under its masked threshold\); the accompaniment \(clarinets, ${DB} under its masked threshold\)\.`),
+    );
+  });
+
+  it("heard-at-box on the sweeps' path hears the background of its own listening point, not the first one's", () => {
+    const flutes = row("F", 2, 10, { instrument: "flute", section: "flutes", dynamic: "mp" });
+    const i: AnalysisInput = { performers: flutes, listeningPoints: [{ ...BOX, id: "quiet", background: { preset: "quiet-field" } }, { ...BOX, id: "crowd", background: { preset: "stadium-between-bands" } }] as AnalysisInput["listeningPoints"], conditions: AIR };
+    const points = analyzeSet(i).points;
+    const verdict = (n: number) => checkBalance(i, { ...points[n]!, loudness: undefined }).find((c) => c.id === "heard-at-box")!.status;
+    expect([verdict(0), verdict(1)]).toEqual(["pass", "fail"]);
+  });
+});
