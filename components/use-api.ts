@@ -3,12 +3,7 @@
 import useSWR, { type SWRResponse } from "swr";
 import { ApiError, fetcher } from "./fetcher";
 
-export const apiKeys = {
-  me: "/api/me",
-  program: (programId: string) => `/api/programs/${encodeURIComponent(programId)}`,
-  programShows: (programId: string) => `/api/programs/${encodeURIComponent(programId)}/shows`,
-  show: (showId: string) => `/api/shows/${encodeURIComponent(showId)}`,
-};
+export { apiKeys } from "./api-keys";
 
 /** Reads a GET route handler; pass null to wait (dependent keys). Errors that will not change are not retried. */
 export function useApi<T>(key: string | null) {

@@ -10,13 +10,13 @@ import { SkeletonCard } from "@/components/Skeleton";
 import { apiKeys, useApi } from "@/components/use-api";
 
 export function ProgramList() {
-  const { data, error, isLoading, mutate } = useApi<MeResponse>(apiKeys.me);
+  const { data, error, mutate } = useApi<MeResponse>(apiKeys.me);
   return (
     <>
       <PageTitle sub="Open a program to see its shows and its people.">Your programs</PageTitle>
       {error ? (
         <ErrorState error={error} what="program" onRetry={() => mutate()} />
-      ) : isLoading || !data ? (
+      ) : !data ? (
         <SkeletonCard rows={2} label="Loading your programs…" />
       ) : data.memberships.length === 0 ? (
         <EmptyState title="You are not in any program yet">Ask a director to add you, or create an account with a program of your own.</EmptyState>

@@ -10,6 +10,7 @@ import type { PointLoudness } from "@/lib/acoustics/point-loudness";
 import { VOICES, type Voice } from "@/lib/acoustics/types";
 import { VOICE_STYLES } from "./palette";
 import { MarkIcon } from "./MarkIcon";
+import { useLocalTimes } from "../local-time";
 
 export interface MixFigures {
   totalDbA: number;
@@ -38,6 +39,7 @@ function Bar({ value, top, colour }: { value: number | undefined; top: number; c
 
 export function MixPanel({ mix, source, pointName, computedAt }: { mix: MixFigures | null; source: "preview" | "stored" | "loading"; pointName: string; computedAt?: string }) {
   const fmt = fmtAt(mix?.uncertainty?.precisionDb ?? 1);
+  const format = useLocalTimes();
   const sections = mix ? Object.entries(mix.sections).filter(([, s]) => Number.isFinite(s.dbA)).sort((a, b) => b[1].dbA - a[1].dbA) : [];
   return (
     <section aria-labelledby="mix-title" className="rounded-xl border border-ink/10 bg-paper-raised p-4 shadow-sm" data-testid="mix-panel" data-source={source}>
@@ -111,7 +113,7 @@ export function MixPanel({ mix, source, pointName, computedAt }: { mix: MixFigur
         <p className="mt-3 text-ink-soft">Computing the mix…</p>
       )}
       <p className="mt-3 text-xs text-ink-soft">
-        Predicted levels (dBA) and loudness (sones, ISO 532-1) from the acoustic model, not measurements; “heard” judges masking by the rest of the band and the background only. {source === "stored" && computedAt ? `Stored ${new Date(computedAt).toLocaleTimeString()}.` : null}{" "}
+        Predicted levels (dBA) and loudness (sones, ISO 532-1) from the acoustic model, not measurements; “heard” judges masking by the rest of the band and the background only. {source === "stored" && computedAt ? `Stored ${format(computedAt, { hour: "numeric", minute: "2-digit", second: "2-digit" })}.` : null}{" "}
         Levels among the players are far higher than at the box: protect hearing and follow local rules.
       </p>
     </section>

@@ -26,47 +26,81 @@ export interface SweepStore {
 /** What a sweep needs of a show: the balance context, the sets with their positions, the points and targets. */
 export type SweepShow = Pick<ShowBalance, "ctx" | "sets" | "listeningPoints" | "targets">;
 export type StoredSweepKey = Omit<Awaited<ReturnType<SweepStore["list"]>>[number], "result">;
-/** Each set's inputs hash, and the sweeps computed now for the sets the store did not match. */
-export interface StaleSweeps {
+/** Each set's inputs hash, and the sets whose stored rows do not all match it. */
+export interface SweepHashes {
   hashes: Record<string, string>;
-  computed: Record<string, Record<string, SweepSample[]>>;
+  stale: string[];
 }
-/** Runs staleSweeps, in this thread or another. */
-export type SweepRunner = (sb: SweepShow, stored: StoredSweepKey[]) => Promise<StaleSweeps>;
+export type ComputedSweeps = Record<string, Record<string, SweepSample[]>>;
+/** Runs the two pure steps below, in this thread or another. */
+export interface SweepRunner {
+  hashes(sb: SweepShow, stored: StoredSweepKey[]): Promise<SweepHashes>;
+  sweeps(sb: SweepShow, setIds: string[]): Promise<ComputedSweeps>;
+}
 
-/**
- * Pure: hashes the inputs of each set's sweep (the same for every listening point but stored per point)
- * and computes the sweeps of the sets whose stored rows do not all match.
- */
-export function staleSweeps(sb: SweepShow, stored: StoredSweepKey[]): StaleSweeps {
+/** What the sweep of the show's i-th set reads: its played inputs, and where the players come from (none for the first set). */
+function transitionInputs(sb: SweepShow, i: number) {
+  const set = sb.sets[i]!;
+  const prev = i > 0 ? sb.sets[i - 1]! : null;
+  const { played } = setInputs(sb.ctx, { order: set.order, positions: set.positions });
+  return { set, played, from: prev && prev.positions.length ? prev.positions : null };
+}
+
+/** Pure: hashes the inputs of each set's sweep (the same for every listening point but stored per point). */
+export function sweepHashes(sb: SweepShow, stored: StoredSweepKey[]): SweepHashes {
   const key = (setId: string, lp: string) => `${setId}\u0000${lp}`;
   const byKey = new Map(stored.map((r) => [key(r.setId, r.listeningPointId), r]));
   const lpIds = sb.listeningPoints.map((l) => l.id);
-  const out: StaleSweeps = { hashes: {}, computed: {} };
-  sb.sets.forEach((set, i) => {
-    const prev = i > 0 ? sb.sets[i - 1]! : null;
-    const { played } = setInputs(sb.ctx, { order: set.order, positions: set.positions });
-    const from = prev && prev.positions.length ? prev.positions : null;
+  const out: SweepHashes = { hashes: {}, stale: [] };
+  sb.sets.forEach((_, i) => {
+    const { set, played, from } = transitionInputs(sb, i);
     const hash = createHash("sha256").update(JSON.stringify({ played, from, counts: set.counts, targets: sb.targets })).digest("hex");
     out.hashes[set.id] = hash;
     const fresh = lpIds.every((lp) => {
       const r = byKey.get(key(set.id, lp));
       return r && r.inputsHash === hash && r.modelVersion === SWEEP_VERSION;
     });
-    if (!fresh) out.computed[set.id] = sweepTransition(played, from, set.counts, sb.targets);
+    if (!fresh) out.stale.push(set.id);
   });
   return out;
 }
 
-const inThisThread: SweepRunner = async (sb, stored) => staleSweeps(sb, stored);
+/** Pure: the sweeps of the given sets, each from the set before it, per listening point. */
+export function setSweeps(sb: SweepShow, setIds: string[]): ComputedSweeps {
+  const out: ComputedSweeps = {};
+  sb.sets.forEach((s, i) => {
+    if (!setIds.includes(s.id)) return;
+    const { set, played, from } = transitionInputs(sb, i);
+    out[set.id] = sweepTransition(played, from, set.counts, sb.targets);
+  });
+  return out;
+}
 
-/** All sweeps of the show; `recomputed` counts the sets computed now, the rest came from the store. */
-export async function showSweeps(sb: SweepShow, store: SweepStore, run: SweepRunner = inThisThread): Promise<{ sweeps: SetSweep[]; recomputed: number; reused: number }> {
+const inThisThread: SweepRunner = { hashes: async (sb, stored) => sweepHashes(sb, stored), sweeps: async (sb, ids) => setSweeps(sb, ids) };
+
+/** At most this many steps of progress: each is one task, so fewer steps cost less handing the show to a worker. */
+const PROGRESS_STEPS = 8;
+
+/**
+ * All sweeps of the show; `recomputed` counts the sets computed now, the rest came from the store.
+ * `onProgress` hears how many of the sets to compute are done, after each step.
+ */
+export async function showSweeps(
+  sb: SweepShow,
+  store: SweepStore,
+  run: SweepRunner = inThisThread,
+  onProgress: (done: number, total: number) => void = () => {},
+): Promise<{ sweeps: SetSweep[]; recomputed: number; reused: number }> {
   const stored = await store.list(sb.sets.map((s) => s.id));
-  const { hashes, computed } = await run(
-    { ctx: sb.ctx, sets: sb.sets, listeningPoints: sb.listeningPoints, targets: sb.targets },
-    stored.map(({ result: _result, ...k }) => k),
-  );
+  const show: SweepShow = { ctx: sb.ctx, sets: sb.sets, listeningPoints: sb.listeningPoints, targets: sb.targets };
+  const { hashes, stale } = await run.hashes(show, stored.map(({ result: _result, ...k }) => k));
+  const computed: ComputedSweeps = {};
+  const size = Math.ceil(stale.length / PROGRESS_STEPS);
+  onProgress(0, stale.length);
+  for (let i = 0; i < stale.length; i += size) {
+    Object.assign(computed, await run.sweeps(show, stale.slice(i, i + size)));
+    onProgress(Math.min(i + size, stale.length), stale.length);
+  }
   const results = new Map(stored.map((r) => [`${r.setId}\u0000${r.listeningPointId}`, r.result as SweepSample[]]));
   const lpIds = sb.listeningPoints.map((l) => l.id);
   const toSave: Parameters<SweepStore["save"]>[0] = [];

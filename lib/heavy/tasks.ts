@@ -2,10 +2,10 @@
 // module is the workers' entry point: it and all it imports must be pure (no framework, no database).
 import { hearingMap } from "@/lib/acoustics/hearing";
 import { phrasePlan } from "@/lib/analysis/phrase-plan";
-import { staleSweeps } from "@/lib/analysis/show-sweeps";
+import { setSweeps, sweepHashes } from "@/lib/analysis/show-sweeps";
 import { readShowFile } from "@/lib/show-file/read";
 
-export const HEAVY_TASKS = { staleSweeps, hearingMap, readShowFile, phrasePlan };
+export const HEAVY_TASKS = { sweepHashes, setSweeps, hearingMap, readShowFile, phrasePlan };
 
 export type HeavyTask = keyof typeof HEAVY_TASKS;
 export type HeavyArgs<K extends HeavyTask> = Parameters<(typeof HEAVY_TASKS)[K]>;

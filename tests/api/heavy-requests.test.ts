@@ -56,10 +56,15 @@ describe("whole-show work runs off the request thread", () => {
     let done = false;
     const heavy = timed(copy.director, `/api/shows/${showId}/timeline?listeningPointId=${pointId}`).finally(() => (done = true));
     const health: number[] = [];
+    const progress: { done: number; total: number }[] = [];
     while (!done) {
       const { res, ms } = await timed(copy.director, "/api/health");
       expect(res.status).toBe(200);
       health.push(ms);
+      // The page waiting on it reads how far the work has got (issue on speed: progress past a second).
+      const seen = await copy.director.get(`/api/shows/${showId}/work-progress`);
+      expect(seen.status).toBe(200);
+      if (seen.body.sweeps && !done) progress.push(seen.body.sweeps);
       await new Promise((r) => setTimeout(r, 25));
     }
     const { res, ms: heavyMs } = await heavy;
@@ -69,6 +74,12 @@ describe("whole-show work runs off the request thread", () => {
     // check waits for most of the computation; off it, health answers in a small part of it.
     expect(health.length).toBeGreaterThanOrEqual(3);
     expect(Math.max(...health)).toBeLessThan(heavyMs / 4);
+    // Five sets to sweep (the first has no transition but is stored too), counted as they finish.
+    expect(progress.length).toBeGreaterThan(0);
+    expect(progress.every((p) => p.total === 5 && p.done >= 0 && p.done <= 5)).toBe(true);
+    expect(progress.map((p) => p.done)).toEqual([...progress.map((p) => p.done)].sort((a, b) => a - b));
+    expect(new Set(progress.map((p) => p.done)).size, "progress moved while the work ran").toBeGreaterThan(1);
+    expect((await copy.director.get(`/api/shows/${showId}/work-progress`)).body.sweeps).toBeNull();
   }, 180_000);
 });
 

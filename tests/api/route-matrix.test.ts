@@ -74,6 +74,7 @@ const RULES: Record<string, Rule> = {
   "GET shows/[showId]/compare": { roles: ALL },
   "GET shows/[showId]/sweep": { roles: ALL },
   "GET shows/[showId]/timeline": { roles: ALL },
+  "GET shows/[showId]/work-progress": { roles: ALL },
   "GET shows/[showId]/music": { roles: ALL },
   "PATCH shows/[showId]/music/assignments": { roles: EDITORS, body: "json" },
   "PUT shows/[showId]/music/overrides": { roles: EDITORS, body: "json" },

@@ -3,9 +3,11 @@
 import { useState } from "react";
 import { Button } from "@/components/Button";
 import { sendJson } from "@/components/fetcher";
+import { useLocalTimes } from "@/components/local-time";
 
 export function DeletedShows({ shows, onRestored }: { shows: { id: string; name: string; purgeAt: string }[]; onRestored(): void }) {
   const [error, setError] = useState<string | null>(null);
+  const format = useLocalTimes();
   return (
     <div className="mt-4 rounded-lg border border-ink/15 bg-paper p-3">
       <h3 className="font-semibold">Recently deleted</h3>
@@ -13,7 +15,7 @@ export function DeletedShows({ shows, onRestored }: { shows: { id: string; name:
         {shows.map((s) => (
           <li key={s.id} className="flex flex-wrap items-center justify-between gap-2">
             <span>
-              {s.name} <span className="text-sm text-ink-soft">(gone for good on {new Date(s.purgeAt).toLocaleDateString()})</span>
+              {s.name} <span className="text-sm text-ink-soft">(gone for good on {format(s.purgeAt, { dateStyle: "medium" })})</span>
             </span>
             <Button
               variant="secondary"

@@ -15,6 +15,8 @@ import { LoudnessBars, type LoudnessRow } from "./LoudnessBars";
 import { MiniField } from "@/components/MiniField";
 import { SpreadLegend } from "@/components/field/Legend";
 import { instrumentSpreadDeg } from "@/lib/field/marks";
+import { showKeys } from "@/components/api-keys";
+import { comparedSets, firstListeningPointId } from "@/lib/show/first-choices";
 
 type Loud = { sone: number; phon: number; shareSone: number; heard: boolean };
 type Side = {
@@ -43,13 +45,11 @@ export function CompareView({ showId, initialA, initialB }: { showId: string; in
   const [a, setA] = useState<string | null>(initialA);
   const [b, setB] = useState<string | null>(initialB);
   const [point, setPoint] = useState<string | null>(null);
-  const aId = a ?? sets[0]?.id ?? null;
-  const bId = b ?? sets[sets.findIndex((s) => s.id === aId) + 1]?.id ?? null;
-  const lp = point ?? show.data?.listeningPoints[0]?.id ?? null;
-  const base = `/api/shows/${encodeURIComponent(showId)}`;
-  const cmp = useApi<CompareResponse>(aId && bId && lp ? `${base}/compare?a=${aId}&b=${bId}&listeningPointId=${lp}` : null);
-  const fieldA = useApi<SetResponse>(aId ? `${base}/sets/${aId}` : null);
-  const fieldB = useApi<SetResponse>(bId ? `${base}/sets/${bId}` : null);
+  const { aId, bId } = comparedSets(sets, a, b);
+  const lp = point ?? firstListeningPointId(show.data?.listeningPoints ?? []);
+  const cmp = useApi<CompareResponse>(aId && bId && lp ? showKeys.compare(showId, aId, bId, lp) : null);
+  const fieldA = useApi<SetResponse>(aId ? showKeys.set(showId, aId) : null);
+  const fieldB = useApi<SetResponse>(bId ? showKeys.set(showId, bId) : null);
   const crumbs = [{ label: "Programs", href: "/programs" }, { label: show.data?.show.name ?? "Show", href: `/shows/${showId}` }, { label: "Set compare" }];
   const error = show.error ?? cmp.error;
   if (error) return (<><Breadcrumbs items={crumbs} /><ErrorState error={error} what="set" onRetry={() => cmp.mutate()} /></>);

@@ -17,6 +17,8 @@ import { HearingCautions } from "./HearingCautions";
 import { SpreadLegend } from "@/components/field/Legend";
 import { HearingField } from "./HearingField";
 import { LEVEL_STEPS, type HearingPerformer, type HearingResponse } from "./hearing-types";
+import { showKeys } from "@/components/api-keys";
+import { FIRST_REHEARSAL_MINUTES } from "@/lib/show/first-choices";
 
 const TOP = 15;
 const SELECT = "mt-1 block min-h-12 w-full rounded-lg border border-ink/30 bg-paper-raised px-3 text-lg text-ink";
@@ -28,13 +30,13 @@ export function HearingView({ showId }: { showId: string }) {
   const programId = show.data?.show.programId ?? null;
   const program = useApi<ProgramResponse>(programId ? apiKeys.program(programId) : null);
   const [setId, setSetId] = useState<string | null>(null);
-  const [length, setLength] = useState("120");
+  const [length, setLength] = useState(String(FIRST_REHEARSAL_MINUTES));
   const [standard, setStandard] = useState<"niosh" | "osha">("niosh");
   const [selectedId, setSelectedId] = useState<string | null>(null);
   const [showAll, setShowAll] = useState(false);
   const chosenSet = setId ?? show.data?.sets[0]?.id ?? null;
-  const rehearsal = Number(length) > 0 && Number(length) <= 1440 ? Number(length) : 120;
-  const map = useApi<HearingResponse>(chosenSet ? `/api/shows/${encodeURIComponent(showId)}/sets/${encodeURIComponent(chosenSet)}/hearing?minutes=${rehearsal}` : null);
+  const rehearsal = Number(length) > 0 && Number(length) <= 1440 ? Number(length) : FIRST_REHEARSAL_MINUTES;
+  const map = useApi<HearingResponse>(chosenSet ? showKeys.hearing(showId, chosenSet, rehearsal) : null);
 
   const crumbs = [
     { label: "Programs", href: "/programs" },

@@ -12,15 +12,18 @@ import { useApi } from "@/components/use-api";
 import { ShowNav } from "@/components/ShowNav";
 import { CsvFormat } from "./CsvFormat";
 import { PreviewPanel, type Preview } from "./PreviewPanel";
+import { apiKeys, showKeys } from "@/components/api-keys";
+import { useLocalTimes } from "@/components/local-time";
 
 type Upload = { id: string; kind: string; fileName: string; sizeBytes: number; uploadedAt: string; uploadedBy: string | null; confirmedAt: string | null };
 type ShowInfo = { show: { id: string; name: string; programId: string }; role: string; sets: { id: string; number: string }[] };
 
 export function ImportsView({ showId }: { showId: string }) {
-  const show = useApi<ShowInfo>(`/api/shows/${showId}`);
-  const history = useApi<{ uploads: Upload[] }>(`/api/shows/${showId}/imports`);
+  const show = useApi<ShowInfo>(apiKeys.show(showId));
+  const history = useApi<{ uploads: Upload[] }>(showKeys.imports(showId));
   const [current, setCurrent] = useState<{ upload: Upload; preview: Preview } | null>(null);
   const [status, setStatus] = useState<{ tone: "info" | "bad"; text: string } | null>(null);
+  const format = useLocalTimes();
   const [busy, setBusy] = useState(false);
   const [written, setWritten] = useState<string | null>(null);
 
@@ -137,7 +140,7 @@ export function ImportsView({ showId }: { showId: string }) {
                         <span className="text-ink-soft">({u.kind.replace("-csv", "").replace("show-json", "show file")})</span>
                       </td>
                       <td className="py-2 pr-2">{u.uploadedBy ?? "—"}</td>
-                      <td className="py-2 pr-2">{new Date(u.uploadedAt).toLocaleString()}</td>
+                      <td className="py-2 pr-2">{format(u.uploadedAt, { dateStyle: "medium", timeStyle: "short" })}</td>
                       <td className="py-2">{u.confirmedAt ? "yes" : "no"}</td>
                     </tr>
                   ))}

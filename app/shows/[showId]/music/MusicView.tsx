@@ -17,8 +17,9 @@ import { OverridesPanel } from "./OverridesPanel";
 import { PhraseForm } from "./PhraseForm";
 import { PhraseTable } from "./PhraseTable";
 import { PlanPanel } from "./PlanPanel";
+import { showKeys } from "@/components/api-keys";
 
-export const musicKey = (showId: string) => `/api/shows/${encodeURIComponent(showId)}/music`;
+export const musicKey = showKeys.music;
 
 export function MusicView({ showId, initialPhraseId }: { showId: string; initialPhraseId: string | null }) {
   const show = useApi<ShowResponse>(apiKeys.show(showId));

@@ -1,5 +1,8 @@
 import type { Metadata } from "next";
 import { PageShell } from "@/components/PageShell";
+import { Preloaded } from "@/components/Preloaded";
+import { preloadShowPage } from "../preload";
+import { showKeys } from "@/components/api-keys";
 import { requireSignedIn } from "@/lib/auth/page-session";
 import { MusicView } from "./MusicView";
 
@@ -9,9 +12,12 @@ export default async function MusicPage({ params, searchParams }: { params: Prom
   const { showId } = await params;
   const { phrase } = await searchParams;
   const user = await requireSignedIn(`/shows/${encodeURIComponent(showId)}/music`);
+  const answers = await preloadShowPage(showId, () => [showKeys.music(showId)]);
   return (
     <PageShell userName={user.name}>
-      <MusicView showId={showId} initialPhraseId={phrase ?? null} />
+      <Preloaded answers={answers}>
+        <MusicView showId={showId} initialPhraseId={phrase ?? null} />
+      </Preloaded>
     </PageShell>
   );
 }

@@ -8,11 +8,13 @@ import type { ApiState } from "@/components/use-api";
 import { plainSource } from "@/lib/sources/plain-source";
 import { instrumentName } from "../instrument-options";
 import type { CatalogResponse } from "./readings-types";
+import { useLocalTimes } from "@/components/local-time";
 
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
 
 export function CatalogHistory({ programId, catalog, canRestore, onChanged }: { programId: string; catalog: ApiState<CatalogResponse>; canRestore: boolean; onChanged: () => Promise<unknown> }) {
   const [message, setMessage] = useState<{ tone: "info" | "bad"; text: string } | null>(null);
+  const format = useLocalTimes();
+  const when = (iso: string) => format(iso, { dateStyle: "medium", timeStyle: "short" });
   if (catalog.error) return <p className="text-signal-bad">{catalog.error.message}</p>;
   if (!catalog.data) return <p className="text-ink-soft">Loading the catalog history…</p>;
   const { currentVersion, versions } = catalog.data;

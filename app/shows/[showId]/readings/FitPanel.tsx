@@ -9,9 +9,9 @@ import { signedDb } from "@/components/format";
 import type { ApiState } from "@/components/use-api";
 import { FitChart } from "./FitChart";
 import type { FitInstrument, FitResponse, Reading } from "./readings-types";
+import { useLocalTimes } from "@/components/local-time";
 
 const db1 = (x: number) => (Math.round(x * 10) / 10).toFixed(1);
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
 
 /** Beyond this a carry change is more likely a recording slip than the instrument (common practice, no source). */
 const LARGE_CHANGE_DB = 10;
@@ -34,6 +34,8 @@ type Props = {
 
 export function FitPanel({ showId, programId, readings, fit, canAdopt, onChanged }: Props) {
   const [message, setMessage] = useState<{ tone: "info" | "bad"; text: string } | null>(null);
+  const format = useLocalTimes();
+  const when = (iso: string) => format(iso, { dateStyle: "medium", timeStyle: "short" });
   const [busy, setBusy] = useState(false);
   /** The version just adopted, while it is the one to undo. */
   const [adopted, setAdopted] = useState<number | null>(null);

@@ -7,6 +7,7 @@ import { ApiError, sendJson } from "@/components/fetcher";
 import { FormMessage } from "@/components/FormMessage";
 import { TextField } from "@/components/TextField";
 import { DYNAMICS } from "@/lib/acoustics/types";
+import { useInBrowser } from "@/components/local-time";
 
 const SELECT = "mt-1 block min-h-12 w-full rounded-lg border border-ink/30 bg-paper-raised px-3 text-lg text-ink";
 
@@ -20,7 +21,10 @@ export function ReadingForm({ show, onSaved }: { show: ShowResponse; onSaved: ()
   const sectionNames = [...new Set(show.performers.map((p) => p.section))];
   const [setId, setSetId] = useState(show.sets[0]?.id ?? "");
   const [pointId, setPointId] = useState(show.listeningPoints[0]?.id ?? "");
-  const [takenAt, setTakenAt] = useState(localNow);
+  // Now, in the reader's zone, until they change it: known only in the browser (the server renders first).
+  const [chosenTakenAt, setTakenAt] = useState<string | null>(null);
+  const inBrowser = useInBrowser();
+  const takenAt = chosenTakenAt ?? (inBrowser ? localNow() : "");
   const [temperatureC, setTemperature] = useState(String(show.show.conditions.temperatureC));
   const [humidity, setHumidity] = useState(String(show.show.conditions.relativeHumidityPct));
   const [sections, setSections] = useState([{ section: sectionNames[0] ?? "", dynamic: "f" }]);

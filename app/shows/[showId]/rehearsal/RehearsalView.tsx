@@ -22,6 +22,7 @@ import { CHECK_LABELS } from "@/lib/music/check-labels";
 import type { RehearsalItem } from "@/lib/rehearsal/plan";
 import { setListWords } from "@/lib/show/set-words";
 import { BuildUpList } from "./BuildUpList";
+import { showKeys } from "@/components/api-keys";
 
 type Options = {
   show: { id: string; name: string };
@@ -37,7 +38,7 @@ type KeptList = { plans: { id: string; name: string; budgetMinutes: number; crea
 const SOURCE_WORDS = { adopted: "adopted plan", proposed: "proposed", written: "as written" } as const;
 
 export function RehearsalView({ showId, initial }: { showId: string; initial: { phraseIds: string[]; setIds: string[]; pointId: string | null } }) {
-  const options = useApi<Options>(`/api/shows/${showId}/rehearsal-plan`);
+  const options = useApi<Options>(showKeys.rehearsalPlan(showId));
   const [phraseIds, setPhraseIds] = useState<string[]>(initial.phraseIds);
   const [setIds, setSetIds] = useState<string[]>(initial.setIds);
   const [pointId, setPointId] = useState<string | null>(initial.pointId);
@@ -47,7 +48,7 @@ export function RehearsalView({ showId, initial }: { showId: string; initial: { 
   const [recipients, setRecipients] = useState<string[]>([]);
   const [budget, setBudget] = useState("30");
   const [planName, setPlanName] = useState("");
-  const kept = useApi<KeptList>(`/api/shows/${showId}/rehearsal-plans`);
+  const kept = useApi<KeptList>(showKeys.rehearsalPlans(showId));
 
   const choice = () => ({ phraseIds, setIds, listeningPointId: pointId ?? options.data?.listeningPoints[0]?.id, budgetMinutes: Number(budget) });
   async function keep() {

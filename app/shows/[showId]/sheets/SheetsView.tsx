@@ -14,12 +14,13 @@ import type { FieldRules } from "@/lib/field/geometry";
 import type { PerformerSheet, SetSheet } from "@/lib/sheets/coordinates";
 import { MARK_KEY } from "@/lib/sheets/mark-key";
 import { FieldDrawing } from "./FieldDrawing";
+import { showKeys } from "@/components/api-keys";
 
 type Sheets = { programName: string; show: { id: string; name: string; fieldRules: FieldRules }; performers: PerformerSheet[]; sets: SetSheet[] };
 
 
 export function SheetsView({ showId, by }: { showId: string; by: "performers" | "sets" }) {
-  const sheets = useApi<Sheets>(`/api/shows/${showId}/sheets`);
+  const sheets = useApi<Sheets>(showKeys.sheets(showId));
   if (sheets.error) return <ErrorState error={sheets.error} what="show" onRetry={() => sheets.mutate()} />;
   const data = sheets.data;
   const setsByNumber = new Map((data?.sets ?? []).map((s) => [s.number, s]));

@@ -15,6 +15,7 @@ import type { ShowResponse } from "@/components/api-types";
 import { ShowNav } from "@/components/ShowNav";
 import Link from "next/link";
 import { perUnit, TARGET_FIELDS, type TargetKey } from "./target-fields";
+import { showKeys } from "@/components/api-keys";
 
 type TargetsResponse = {
   targets: Record<TargetKey, number> & { pyramidVoices: string[] };
@@ -25,7 +26,7 @@ type TargetsResponse = {
 };
 
 export function TargetsForm({ showId }: { showId: string }) {
-  const key = `/api/shows/${encodeURIComponent(showId)}/targets`;
+  const key = showKeys.targets(showId);
   const targets = useApi<TargetsResponse>(key);
   const show = useApi<ShowResponse>(apiKeys.show(showId));
   const [draft, setDraft] = useState<Partial<Record<TargetKey, string>>>({});

@@ -9,20 +9,22 @@ import { Card } from "@/components/Card";
 import { ErrorState } from "@/components/ErrorState";
 import { NextStepNotice } from "@/components/NextStepNotice";
 import { PageTitle } from "@/components/PageTitle";
-import { SkeletonCard } from "@/components/Skeleton";
 import { apiKeys, useApi } from "@/components/use-api";
 import { ShowNav } from "@/components/ShowNav";
 import { CHECK_LABELS, VOICE_LABELS, formatDb, formatSone } from "../music/voices";
 import type { Measure, TimelineResponse, TimelineSample } from "./timeline-types";
 import { VoiceChart } from "./VoiceChart";
+import { showKeys } from "@/components/api-keys";
+import { firstListeningPointId } from "@/lib/show/first-choices";
+import { SweepProgress } from "@/components/SweepProgress";
 
 const CHECKS = Object.keys(CHECK_LABELS);
 
 export function TimelineView({ showId }: { showId: string }) {
   const show = useApi<ShowResponse>(apiKeys.show(showId));
   const [pointId, setPointId] = useState<string | null>(null);
-  const lp = pointId ?? show.data?.listeningPoints[0]?.id ?? null;
-  const timeline = useApi<TimelineResponse>(lp ? `/api/shows/${encodeURIComponent(showId)}/timeline?listeningPointId=${lp}` : null);
+  const lp = pointId ?? firstListeningPointId(show.data?.listeningPoints ?? []);
+  const timeline = useApi<TimelineResponse>(lp ? showKeys.timeline(showId, lp) : null);
   const [shade, setShade] = useState<string>("melody-forward");
   const [measure, setMeasure] = useState<Measure>("dba");
   const [sweepSetId, setSweepSetId] = useState<string | null>(null);
@@ -41,7 +43,7 @@ export function TimelineView({ showId }: { showId: string }) {
       </>
     );
   }
-  if (!show.data || !timeline.data) return <SkeletonCard rows={8} label="Computing the show timeline…" />;
+  if (!show.data || !timeline.data) return <SweepProgress showId={showId} label="Computing the show timeline…" />;
   const t = timeline.data;
   const setHref = (setId: string, count?: number) => `/shows/${showId}/sets/${setId}${count !== undefined ? `?count=${count}` : ""}`;
   const sweepSet = t.sets.find((s) => s.setId === sweepSetId) ?? t.sets.find((s) => s.counts > 0 && s.startCount < s.showCount) ?? t.sets[0]!;

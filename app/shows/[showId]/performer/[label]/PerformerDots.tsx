@@ -11,11 +11,12 @@ import { SkeletonCard } from "@/components/Skeleton";
 import { useApi } from "@/components/use-api";
 import type { PerformerSheet, SetSheet } from "@/lib/sheets/coordinates";
 import { instrumentName } from "../../instrument-options";
+import { showKeys } from "@/components/api-keys";
 
 type Sheets = { show: { id: string; name: string }; performers: PerformerSheet[]; sets: SetSheet[] };
 
 export function PerformerDots({ showId, label }: { showId: string; label: string }) {
-  const sheets = useApi<Sheets>(`/api/shows/${encodeURIComponent(showId)}/sheets`);
+  const sheets = useApi<Sheets>(showKeys.sheets(showId));
   const crumbs = [
     { label: "Programs", href: "/programs" },
     { label: sheets.data?.show.name ?? "Show", href: `/shows/${showId}` },

@@ -1,5 +1,8 @@
 import type { Metadata } from "next";
 import { PageShell } from "@/components/PageShell";
+import { Preloaded } from "@/components/Preloaded";
+import { preloadShowPage } from "../../preload";
+import { showKeys } from "@/components/api-keys";
 import { requireSignedIn } from "@/lib/auth/page-session";
 import { PerformerDots } from "./PerformerDots";
 
@@ -8,9 +11,12 @@ export const metadata: Metadata = { title: "My dots" };
 export default async function PerformerPage({ params }: PageProps<"/shows/[showId]/performer/[label]">) {
   const { showId, label } = await params;
   const user = await requireSignedIn(`/shows/${encodeURIComponent(showId)}/performer/${encodeURIComponent(label)}`);
+  const answers = await preloadShowPage(showId, () => [showKeys.sheets(showId)]);
   return (
     <PageShell userName={user.name}>
-      <PerformerDots showId={showId} label={decodeURIComponent(label)} />
+      <Preloaded answers={answers}>
+        <PerformerDots showId={showId} label={decodeURIComponent(label)} />
+      </Preloaded>
     </PageShell>
   );
 }

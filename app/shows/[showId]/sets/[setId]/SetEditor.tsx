@@ -37,6 +37,7 @@ import { useSetSaver } from "./use-set-saver";
 import { TransitionPlayer } from "./TransitionPlayer";
 import { usePlayback } from "./use-playback";
 import { createLiveMix, useLiveMix, type LiveMix } from "./live-mix";
+import { firstListeningPointId } from "@/lib/show/first-choices";
 
 /** The mix panel, showing a drag's live mix while there is one. */
 function LiveMixPanel({ live, mix, source, ...rest }: { live: LiveMix } & Parameters<typeof MixPanel>[0]) {
@@ -92,7 +93,7 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
   const fieldBox = useRef<HTMLDivElement>(null);
 
   const listeningPoints = show.data?.listeningPoints ?? [];
-  const lpId = pointId ?? listeningPoints.find((l) => l.name === "Press box")?.id ?? listeningPoints[0]?.id ?? null;
+  const lpId = pointId ?? firstListeningPointId(listeningPoints);
   const point = listeningPoints.find((l) => l.id === lpId);
 
   const saver = useSetSaver({
@@ -124,7 +125,8 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [setData.data]);
 
-  const version = saver.server?.version ?? null;
+  // Before the first effect adopts the loaded set, its version is the server's: the stored box mix can show at once.
+  const version = saver.server?.version ?? setData.data?.set.version ?? null;
   const analysis = useApi<AnalysisResponse>(lpId && version !== null ? editorKeys.analysis(showId, setId, lpId, version) : null);
   const input = mixInput.data?.input;
   const preview = usePreview(input, lpId, layout);
@@ -142,7 +144,9 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
   const shown = playLayout ?? layout;
 
   const previewMix = useMemo(() => (preview ? preview.mixFor(shown) : null), [preview, shown]);
-  const stored = analysis.data && !saver.dirty && shownCount === null && mixInput.data && !mixInput.isValidating ? analysis.data : null;
+  // Not waiting on a refetch of the live mix's input: the stored mix does not read it, and the page's first
+  // render (from the server's preloaded answers) would otherwise flip from stored to preview and back.
+  const stored = analysis.data && !saver.dirty && shownCount === null && mixInput.data ? analysis.data : null;
   const mix: MixFigures | null = useMemo(() => (stored ? { ...stored.mix, loudness: stored.loudness } : previewMix), [stored, previewMix]);
   const perPerformer: Record<string, number> = useMemo(() => {
     if (stored) return Object.fromEntries(stored.mix.performers.flatMap((p) => (p.dbA === null ? [] : [[p.performerId, p.dbA]])));

@@ -1,7 +1,7 @@
 "use client";
 // What the field editor reads (SWR, one key per resource) and the answers' shapes.
 import type { ShowResponse } from "@/components/api-types";
-import { apiKeys, useApi } from "@/components/use-api";
+import { useApi } from "@/components/use-api";
 import type { CheckConfidence } from "@/lib/acoustics/confidence";
 import type { AnalysisInput, CheckResult, Dynamic, PlanEntry } from "@/lib/acoustics/types";
 import type { PositionRow } from "@/lib/editor/layout";
@@ -22,20 +22,8 @@ export type AnalysisResponse = {
   plan: (PlanEntry & { atLimit?: Extract<Dynamic, "pp" | "fff">; unreachable?: string[] })[];
 };
 
-const setPath = (showId: string, setId: string) => `/api/shows/${encodeURIComponent(showId)}/sets/${encodeURIComponent(setId)}`;
-
-export const editorKeys = {
-  show: apiKeys.show,
-  sets: (showId: string) => `/api/shows/${encodeURIComponent(showId)}/sets`,
-  performers: (showId: string) => `/api/shows/${encodeURIComponent(showId)}/performers`,
-  set: setPath,
-  positions: (showId: string, setId: string) => `${setPath(showId, setId)}/positions`,
-  removeFromSet: (showId: string, setId: string) => `${setPath(showId, setId)}/positions/remove`,
-  mixInput: (showId: string, setId: string) => `${setPath(showId, setId)}/mix-input`,
-  /** The version is part of the key so a save fetches the new stored analysis. */
-  analysis: (showId: string, setId: string, listeningPointId: string, version: number) =>
-    `${setPath(showId, setId)}/analysis?listeningPointId=${encodeURIComponent(listeningPointId)}&v=${version}`,
-};
+export { editorKeys } from "./editor-keys";
+import { editorKeys } from "./editor-keys";
 
 export const useShow = (showId: string) => useApi<ShowResponse>(editorKeys.show(showId));
 export const useSet = (showId: string, setId: string | null) => useApi<SetResponse>(setId ? editorKeys.set(showId, setId) : null);

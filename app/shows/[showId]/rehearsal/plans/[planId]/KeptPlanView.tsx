@@ -14,18 +14,21 @@ import { useApi } from "@/components/use-api";
 import type { RehearsalItem } from "@/lib/rehearsal/plan";
 import { setListWords } from "@/lib/show/set-words";
 import { BuildUpList } from "../../BuildUpList";
+import { useLocalTimes } from "@/components/local-time";
+import { showKeys } from "@/components/api-keys";
 
 type Kept = {
   plan: { id: string; name: string; budgetMinutes: number; listenFrom: { name: string; words: string }; items: (RehearsalItem & { key: string; minutes: number })[] };
   done: { itemKey: string; doneAt: string; doneBy: string | null }[];
 };
 
-const time = (iso: string) => new Date(iso).toLocaleTimeString(undefined, { hour: "numeric", minute: "2-digit" });
 
 export function KeptPlanView({ showId, planId }: { showId: string; planId: string }) {
-  const key = `/api/shows/${encodeURIComponent(showId)}/rehearsal-plans/${encodeURIComponent(planId)}`;
+  const key = showKeys.keptPlan(showId, planId);
   const kept = useApi<Kept>(key);
   const [busy, setBusy] = useState<string | null>(null);
+  const format = useLocalTimes();
+  const time = (iso: string) => format(iso, { hour: "numeric", minute: "2-digit" });
   const [error, setError] = useState<string | null>(null);
   const crumbs = [{ label: "Stadium rehearsal", href: `/shows/${showId}/rehearsal` }, { label: kept.data?.plan.name ?? "Plan" }];
   if (kept.error) return (<><Breadcrumbs items={crumbs} /><ErrorState error={kept.error} what="rehearsal plan" onRetry={() => kept.mutate()} /></>);
