@@ -115,7 +115,10 @@ describe("several listening points and the mix", () => {
       expect(all[n]!.listeningPointId).toBe(pt.id);
       expect(all[n]!.totalDbA).toBeCloseTo(alone.totalDbA, 12);
       expect(all[n]!.arrivalSpreadMs).toBeCloseTo(alone.arrivalSpreadMs, 12);
-      for (const s of ["trumpets", "tubas", "clarinets"]) expect(all[n]!.sections[s]!.bandsDb[3]).toBeCloseTo(alone.sections[s]!.bandsDb[3]!, 12);
+      for (const s of ["trumpets", "tubas", "clarinets"]) {
+        expect(all[n]!.sections[s]!.dbA).toBeCloseTo(alone.sections[s]!.dbA, 12);
+        expect(all[n]!.sections[s]!.bandsDb[3]).toBeCloseTo(alone.sections[s]!.bandsDb[3]!, 12);
+      }
       for (const v of ["melody", "bass", "countermelody"] as const) {
         expect(all[n]!.voices[v]!.dbA).toBeCloseTo(alone.voices[v]!.dbA, 12);
         expect(all[n]!.voices[v]!.bandsDb[5]).toBeCloseTo(alone.voices[v]!.bandsDb[5]!, 12);
