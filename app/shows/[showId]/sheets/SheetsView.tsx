@@ -1,6 +1,7 @@
 "use client";
 // Coordinate sheets on screen and on paper: a sheet per performer (every set in the trade's words) or a sheet per set (the whole field).
 import { FIELD_RULES_WORDS } from "@/lib/field/rules-words";
+import { useId } from "react";
 import Link from "next/link";
 import { Breadcrumbs } from "@/components/Breadcrumbs";
 import { Button, buttonClass } from "@/components/Button";
@@ -13,7 +14,7 @@ import { ShowNav } from "@/components/ShowNav";
 import type { FieldRules } from "@/lib/field/geometry";
 import type { PerformerSheet, SetSheet } from "@/lib/sheets/coordinates";
 import { MARK_KEY } from "@/lib/sheets/mark-key";
-import { FieldDrawing } from "./FieldDrawing";
+import { FieldDrawing, MySpot, SetBands } from "./FieldDrawing";
 import { showKeys } from "@/components/api-keys";
 
 type Sheets = { programName: string; show: { id: string; name: string; fieldRules: FieldRules }; performers: PerformerSheet[]; sets: SetSheet[] };
@@ -21,6 +22,7 @@ type Sheets = { programName: string; show: { id: string; name: string; fieldRule
 
 export function SheetsView({ showId, by }: { showId: string; by: "performers" | "sets" }) {
   const sheets = useApi<Sheets>(showKeys.sheets(showId));
+  const bands = `sheets${useId().replace(/[^A-Za-z0-9]/g, "")}`;
   if (sheets.error) return <ErrorState error={sheets.error} what="show" onRetry={() => sheets.mutate()} />;
   const data = sheets.data;
   const setsByNumber = new Map((data?.sets ?? []).map((s) => [s.number, s]));
@@ -55,6 +57,7 @@ export function SheetsView({ showId, by }: { showId: string; by: "performers" | 
         <p role="status">Preparing the sheets…</p>
       ) : by === "performers" ? (
         <div className="space-y-8">
+          <SetBands rules={data.show.fieldRules} sets={data.sets} prefix={bands} />
           {data.performers.map((p) => (
             <section key={p.label} className="print-sheet rounded-xl border border-ink/10 bg-paper-raised p-6" aria-labelledby={`sheet-${p.label}`}>
               <p className="text-sm text-ink-soft">
@@ -99,7 +102,7 @@ export function SheetsView({ showId, by }: { showId: string; by: "performers" | 
                   return set ? (
                     <li key={r.set} className="break-inside-avoid">
                       <p className="text-xs font-semibold">Set {r.set}</p>
-                      <FieldDrawing rules={data.show.fieldRules} dots={set.dots} mine={p.label} width={127} title={`Set ${r.set}: ${p.label} among the band`} />
+                      <MySpot rules={data.show.fieldRules} set={set} mine={p.label} prefix={bands} title={`Set ${r.set}: ${p.label} among the band`} />
                     </li>
                   ) : null;
                 })}
