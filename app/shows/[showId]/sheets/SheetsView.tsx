@@ -1,7 +1,8 @@
 "use client";
 // Coordinate sheets on screen and on paper: a sheet per performer (every set in the trade's words) or a sheet per set (the whole field).
 import { FIELD_RULES_WORDS } from "@/lib/field/rules-words";
-import { useId } from "react";
+import { useEffect, useId, useState } from "react";
+import { flushSync } from "react-dom";
 import Link from "next/link";
 import { Breadcrumbs } from "@/components/Breadcrumbs";
 import { Button, buttonClass } from "@/components/Button";
@@ -20,9 +21,26 @@ import { showKeys } from "@/components/api-keys";
 type Sheets = { programName: string; show: { id: string; name: string; fieldRules: FieldRules }; performers: PerformerSheet[]; sets: SetSheet[] };
 
 
+const FIRST_SHEETS = 4;
+const SHEETS_PER_BATCH = 6;
+
 export function SheetsView({ showId, by }: { showId: string; by: "performers" | "sets" }) {
   const sheets = useApi<Sheets>(showKeys.sheets(showId));
   const bands = `sheets${useId().replace(/[^A-Za-z0-9]/g, "")}`;
+  // A show's performer sheets are thousands of elements: the first few arrive with the page, the rest
+  // follow in batches so the page is usable at once; printing first draws them all.
+  const total = sheets.data?.performers.length ?? 0;
+  const [shown, setShown] = useState(FIRST_SHEETS);
+  useEffect(() => {
+    if (shown >= total) return;
+    const next = setTimeout(() => setShown((n) => n + SHEETS_PER_BATCH), 30);
+    return () => clearTimeout(next);
+  }, [shown, total]);
+  useEffect(() => {
+    const all = () => flushSync(() => setShown(Infinity));
+    window.addEventListener("beforeprint", all);
+    return () => window.removeEventListener("beforeprint", all);
+  }, []);
   if (sheets.error) return <ErrorState error={sheets.error} what="show" onRetry={() => sheets.mutate()} />;
   const data = sheets.data;
   const setsByNumber = new Map((data?.sets ?? []).map((s) => [s.number, s]));
@@ -42,7 +60,13 @@ export function SheetsView({ showId, by }: { showId: string; by: "performers" | 
         <div className="mb-6 flex flex-wrap items-center gap-3">
           {tab("performers", "A sheet per performer")}
           {tab("sets", "A sheet per set")}
-          <Button variant="secondary" onClick={() => window.print()}>
+          <Button
+            variant="secondary"
+            onClick={() => {
+              flushSync(() => setShown(Infinity));
+              window.print();
+            }}
+          >
             Print
           </Button>
           <a className={buttonClass("secondary")} href={`/api/shows/${showId}/sheets/pdf?by=${by}`}>
@@ -58,7 +82,7 @@ export function SheetsView({ showId, by }: { showId: string; by: "performers" | 
       ) : by === "performers" ? (
         <div className="space-y-8">
           <SetBands rules={data.show.fieldRules} sets={data.sets} prefix={bands} />
-          {data.performers.map((p) => (
+          {data.performers.slice(0, shown).map((p) => (
             <section key={p.label} className="print-sheet rounded-xl border border-ink/10 bg-paper-raised p-6" aria-labelledby={`sheet-${p.label}`}>
               <p className="text-sm text-ink-soft">
                 {data.programName} · {data.show.name}
