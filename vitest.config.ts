@@ -9,7 +9,9 @@ export default defineConfig({
   resolve: { alias },
   test: {
     projects: [
-      { resolve: { alias }, test: { name: "unit", include: ["tests/unit/**/*.test.ts"], environment: "node" } },
+      // Units compute the engine inside their tests (mutation runs need that), some for seconds on a busy
+      // machine: a timeout is no speed check here (npm run bench is), so it is generous.
+      { resolve: { alias }, test: { name: "unit", include: ["tests/unit/**/*.test.ts"], environment: "node", testTimeout: 30_000 } },
       {
         resolve: { alias },
         test: {
