@@ -1,7 +1,7 @@
 // Performer marks of our own: on the field editor, the compare view, the hearing map and the sheets
 // every performer is a sound wedge toward their facing (its spread from the catalog's directivity,
 // lib/field/marks.ts) with the voice on the dot, and a legend says so. No shape-per-family code is
-// left. Screenshots for a person to look at go to /work/notes/shots/marks-*.png (or MARKS_SHOTS).
+// left. Screenshots for a person to look at go to .tmp/shots/marks-*.png (or MARKS_SHOTS).
 import { mkdirSync } from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -9,7 +9,7 @@ import { APP_URL, DEMO, demoIds } from "../support/api";
 import { launchBrowser, signIn, type BrowserSession } from "../support/browser";
 import { openSet } from "./editor-support";
 
-const SHOTS = process.env.MARKS_SHOTS ?? "/work/notes/shots";
+const SHOTS = process.env.MARKS_SHOTS ?? path.resolve(__dirname, "../../.tmp/shots");
 let ids: Awaited<ReturnType<typeof demoIds>>;
 let session: BrowserSession;
 
