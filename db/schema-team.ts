@@ -45,7 +45,7 @@ export const passwordResets = pgTable(
 );
 export type PasswordReset = typeof passwordResets.$inferSelect;
 
-export const uploadKindEnum = pgEnum("upload_kind", ["roster-csv", "drill-csv", "show-json"]);
+export const uploadKindEnum = pgEnum("upload_kind", ["roster-csv", "drill-csv", "show-json", "musicxml"]);
 
 // Every uploaded file as it arrived, with who sent it and when; confirmedAt marks the one write it led to.
 export const uploads = pgTable(

@@ -82,6 +82,7 @@ const RULES: Record<string, Rule> = {
   "POST shows/[showId]/music/phrases": { roles: EDITORS, body: "json" },
   "PATCH shows/[showId]/music/phrases/[phraseId]": { roles: EDITORS, body: "json" },
   "DELETE shows/[showId]/music/phrases/[phraseId]": { roles: EDITORS, body: "none" },
+  "GET shows/[showId]/score/notes": { roles: ALL },
   "GET shows/[showId]/phrases/[phraseId]/plan": { roles: ALL },
   "POST shows/[showId]/phrases/[phraseId]/plan": { roles: DIRECTORS, body: "json" },
   "DELETE shows/[showId]/phrases/[phraseId]/plan": { roles: DIRECTORS, body: "none" },

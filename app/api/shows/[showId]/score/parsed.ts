@@ -1,0 +1,16 @@
+// A kept score file read once per process: an upload never changes, so its parse is reused by id.
+import "server-only";
+import { LRUCache } from "lru-cache";
+import { parseScore } from "@/lib/score/parse-score";
+import type { Score } from "@/lib/score/types";
+
+const cache = new LRUCache<string, Score>({ max: 16 });
+
+/** The score of upload `uploadId` (its bytes `content`), parsed at most once while it stays in the cache. */
+export function parsedScore(uploadId: string, content: Uint8Array): Score {
+  const hit = cache.get(uploadId);
+  if (hit) return hit;
+  const score = parseScore(content);
+  cache.set(uploadId, score);
+  return score;
+}
