@@ -19,6 +19,9 @@ export const MAX_UPLOAD_BYTES = 1_000_000;
 export const MAX_ROSTER_ROWS = 1_000;
 export const MAX_DRILL_ROWS = 20_000;
 
+/** One MusicXML score upload (.musicxml, .xml or compressed .mxl), as sent (413 past it). */
+export const MAX_SCORE_BYTES = 4_000_000;
+
 /** Largest show file accepted for import (bytes). */
 export const MAX_SHOW_FILE_BYTES = 8_000_000;
 

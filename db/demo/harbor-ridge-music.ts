@@ -102,7 +102,9 @@ export const HARBOR_RIDGE_PHRASES: DemoPhrase[] = [
     name: "Trumpet solo",
     firstSet: "9",
     lastSet: "9",
+    // The trumpets rest but for the soloist: the section's marking is the solo's.
     sections: voicing(TACET, {
+      Trumpets: v("tacet", "mf"),
       "Alto Saxes": v("accompaniment", "p"),
       Mellophones: v("accompaniment", "p"),
       Baritones: v("accompaniment", "mp"),

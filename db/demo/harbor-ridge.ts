@@ -1,7 +1,9 @@
 // The demo program (invented): Harbor Ridge High School Marching Band and its show.
+import { readFileSync } from "node:fs";
 import { HARBOR_RIDGE_SETS } from "./harbor-ridge-drill";
 import { HARBOR_RIDGE_PHRASES } from "./harbor-ridge-music";
 import { HARBOR_RIDGE_PERFORMERS } from "./harbor-ridge-roster";
+import { LANTERNS_FILE, LANTERNS_PART_MAP } from "./lanterns-score";
 import type { DemoProgram } from "./types";
 
 export const HARBOR_RIDGE_DIRECTOR = "director@harbor-ridge.example";
@@ -33,6 +35,13 @@ export const HARBOR_RIDGE: DemoProgram = {
       ],
       sets: HARBOR_RIDGE_SETS,
       phrases: HARBOR_RIDGE_PHRASES,
+      // The show's own arrangement, confirmed: set 1 on the downbeat of measure 1, after the pickup.
+      score: {
+        fileName: "lanterns-on-the-water.musicxml",
+        content: readFileSync(LANTERNS_FILE),
+        partMap: LANTERNS_PART_MAP,
+        anchor: { set: "1", measure: "1", beat: 1 },
+      },
     },
   ],
 };

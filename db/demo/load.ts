@@ -5,6 +5,8 @@ import type { PgTable } from "drizzle-orm/pg-core";
 import { z } from "zod";
 import type { Runner } from "@/db/client";
 import * as schema from "@/db/schema";
+import { showScores } from "@/db/schema-score";
+import { uploads } from "@/db/schema-team";
 import { DEFAULT_INSTRUMENTS } from "@/lib/acoustics";
 import { hashPassword, MIN_PASSWORD_LENGTH } from "@/lib/auth/password";
 import { HARBOR_RIDGE, HARBOR_RIDGE_DIRECTOR } from "./harbor-ridge";
@@ -62,6 +64,8 @@ export async function loadDemo(db: Runner, { password }: { password: string }): 
     await insertAll(tx, schema.phrases, rows.phrases);
     await insertAll(tx, schema.voiceAssignments, rows.voiceAssignments);
     await insertAll(tx, schema.performerOverrides, rows.performerOverrides);
+    await insertAll(tx, uploads, rows.uploads);
+    await insertAll(tx, showScores, rows.showScores);
 
     const counts = Object.fromEntries(Object.entries(rows).map(([k, v]) => [k, v.length])) as Record<keyof DemoRows, number>;
     return { loaded: true, counts } as const;

@@ -2,6 +2,8 @@
 import { randomUUID } from "node:crypto";
 import type { InstrumentCatalog } from "@/lib/acoustics/types";
 import type * as t from "@/db/schema";
+import type { showScores } from "@/db/schema-score";
+import type { uploads } from "@/db/schema-team";
 import type { DemoProgram } from "./types";
 
 type Insert<T extends { $inferInsert: unknown }> = T["$inferInsert"];
@@ -20,6 +22,8 @@ export interface DemoRows {
   phrases: Insert<typeof t.phrases>[];
   voiceAssignments: Insert<typeof t.voiceAssignments>[];
   performerOverrides: Insert<typeof t.performerOverrides>[];
+  uploads: Insert<typeof uploads>[];
+  showScores: Insert<typeof showScores>[];
 }
 
 function lookup<V>(map: Map<string, V>, key: string, what: string): V {
@@ -41,6 +45,7 @@ export function demoRows(
   const rows: DemoRows = {
     users: [], programs: [], memberships: [], instrumentCatalogs: [], shows: [], listeningPoints: [],
     performers: [], movements: [], sets: [], positions: [], phrases: [], voiceAssignments: [], performerOverrides: [],
+    uploads: [], showScores: [],
   };
   const userIds = new Map(existingUsers);
 
@@ -99,6 +104,13 @@ export function demoRows(
         for (const o of ph.overrides)
           rows.performerOverrides.push({ phraseId: id, performerId: lookup(performerIds, o.label, "performer"), voice: o.voice, writtenDynamic: o.dynamic, note: o.note });
       });
+      if (show.score) {
+        const uploadId = randomUUID();
+        const by = director ? userIds.get(director.email) : null;
+        const { fileName, content, partMap, anchor } = show.score;
+        rows.uploads.push({ id: uploadId, programId, showId, kind: "musicxml", fileName, sizeBytes: content.byteLength, content, uploadedBy: by, confirmedAt: new Date(), summary: { phrases: show.phrases.length } });
+        rows.showScores.push({ showId, uploadId, partMap, anchors: [{ setId: lookup(setIds, anchor.set, "set"), measure: anchor.measure, beat: anchor.beat }], confirmedBy: by });
+      }
     }
   }
   return rows;

@@ -73,6 +73,8 @@ export interface DemoShow {
   movements: { number: number; name: string }[];
   sets: DemoSet[];
   phrases: DemoPhrase[];
+  /** The arrangement, uploaded and confirmed: the file as sent, each part's section, the anchor. */
+  score?: { fileName: string; content: Buffer; partMap: Record<string, string | null>; anchor: { set: string; measure: string; beat: number } };
 }
 
 export interface DemoProgram {

@@ -152,7 +152,9 @@ function boundariesOf(order: { index: number }[], read: ReturnType<typeof readPa
   const seen = new Set<string>();
   const add = (b: ScoreBoundary) => {
     const key = `${b.kind}@${b.atCount}`;
-    if (!seen.has(key)) out.push(b), seen.add(key);
+    if (seen.has(key)) return;
+    out.push(b);
+    seen.add(key);
   };
   order.forEach(({ index }, k) => {
     const m = measures[k]!;

@@ -2,7 +2,7 @@
 // mark falls, in quarter notes from the measure's start. Elements per W3C MusicXML 4.0 reference:
 // <note> (<pitch>, <unpitched>, <rest>, <chord>, <grace>, <cue>, <duration>, <tie>, <voice>, <staff>),
 // <backup>, <forward>, <direction> (<dynamics>, <wedge>, <words>, <rehearsal>, <metronome>, <offset>,
-// <sound tempo>), <attributes> (<divisions>, <time>). Pure.
+// <sound tempo>), <attributes> (<divisions>, <time>, <transpose>). Pure.
 import { levelOfMarking } from "./dynamics";
 import { midiOf } from "./pitch";
 import type { XmlElement } from "./xml-tree";
@@ -36,6 +36,8 @@ export interface PartState {
   divisions: number;
   beats: number;
   beatType: number;
+  /** Semitones from written to sounding pitch (<transpose>: chromatic + 12 × octave-change). */
+  transpose?: number;
   /** A time signature appeared in this measure. */
   timeChanged?: boolean;
 }
@@ -72,7 +74,7 @@ function readDirection(el: XmlElement, at: number, out: MeasureEvents) {
   if (quarters !== null) out.tempos.push({ at, quarters });
 }
 
-function readNote(el: XmlElement, at: number, quarters: number): NoteEvent | null {
+function readNote(el: XmlElement, at: number, quarters: number, transpose: number): NoteEvent | null {
   const pitch = child(el, "pitch");
   const unpitched = child(el, "unpitched");
   // Unpitched notes (drums) keep their rhythm at the staff position they are written on.
@@ -81,12 +83,13 @@ function readNote(el: XmlElement, at: number, quarters: number): NoteEvent | nul
     : unpitched
       ? midiOf(childText(unpitched, "display-step"), childNumber(unpitched, "display-octave") ?? NaN)
       : null;
-  if (midi === null || quarters <= 0) return null;
+  if (midi === null || quarters <= 0 || midi + transpose < 0 || midi + transpose > 127) return null;
   const ties = childrenNamed(el, "tie").map((t) => t.attrs.type);
   return {
     at,
     length: quarters,
-    midi,
+    // Notes are kept as they sound: a B♭ trumpet's written D5 is C5.
+    midi: midi + transpose,
     voice: `${childText(el, "voice") || "1"}/${childText(el, "staff") || "1"}`,
     tieStart: ties.includes("start"),
     tieStop: ties.includes("stop"),
@@ -108,6 +111,8 @@ export function readMeasure(measure: XmlElement, state: PartState): MeasureEvent
         const time = child(el, "time");
         const beats = Number(childText(time, "beats").split("+").reduce((a, b) => a + Number(b), 0));
         const beatType = childNumber(time, "beat-type");
+        const transpose = child(el, "transpose");
+        if (transpose) state.transpose = (childNumber(transpose, "chromatic") ?? 0) + 12 * (childNumber(transpose, "octave-change") ?? 0);
         if (time && beats > 0 && beatType && beatType > 0) {
           state.beats = beats;
           state.beatType = beatType;
@@ -124,7 +129,7 @@ export function readMeasure(measure: XmlElement, state: PartState): MeasureEvent
           lastStart = cursor;
           cursor += length;
         }
-        const note = child(el, "rest") ? null : readNote(el, start, length);
+        const note = child(el, "rest") ? null : readNote(el, start, length, child(el, "unpitched") ? 0 : (state.transpose ?? 0));
         if (note) out.notes.push(note);
         for (const n of childrenNamed(el, "notations"))
           for (const dyn of childrenNamed(n, "dynamics"))

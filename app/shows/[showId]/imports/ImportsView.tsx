@@ -137,7 +137,7 @@ export function ImportsView({ showId }: { showId: string }) {
                         <a className="underline" href={`/api/shows/${showId}/imports/${u.id}/file`}>
                           {u.fileName}
                         </a>{" "}
-                        <span className="text-ink-soft">({u.kind.replace("-csv", "").replace("show-json", "show file")})</span>
+                        <span className="text-ink-soft">({u.kind.replace("-csv", "").replace("show-json", "show file").replace("musicxml", "score")})</span>
                       </td>
                       <td className="py-2 pr-2">{u.uploadedBy ?? "—"}</td>
                       <td className="py-2 pr-2">{format(u.uploadedAt, { dateStyle: "medium", timeStyle: "short" })}</td>

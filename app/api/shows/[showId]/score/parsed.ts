@@ -14,3 +14,8 @@ export function parsedScore(uploadId: string, content: Uint8Array): Score {
   cache.set(uploadId, score);
   return score;
 }
+
+/** Keeps a score just parsed from its upload, so the next preview of it reads no file. */
+export function rememberScore(uploadId: string, score: Score) {
+  cache.set(uploadId, score);
+}
