@@ -124,6 +124,7 @@ const RULES: Record<string, Rule> = {
   "DELETE shows/[showId]/sets/[setId]": { roles: EDITORS, body: "none" },
   "GET shows/[showId]/sets/[setId]/analysis": { roles: ALL },
   "GET shows/[showId]/sets/[setId]/mix-input": { roles: ALL },
+  "GET shows/[showId]/sets/[setId]/listen": { roles: ALL },
   "GET shows/[showId]/sets/[setId]/hearing": { roles: ALL },
   "PUT shows/[showId]/sets/[setId]/positions": { roles: EDITORS, body: "json" },
   "POST shows/[showId]/sets/[setId]/positions/remove": { roles: EDITORS, body: "json" },
