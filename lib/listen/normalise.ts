@@ -2,7 +2,7 @@
 import { dbToEnergy, energyToDb } from "@/lib/acoustics/levels";
 
 /** RMS (dB re full scale) of the whole mix as written at its loudest count: quiet, with room for the plan and peaks. */
-export const TARGET_MIX_DBFS = -24;
+export const TARGET_MIX_DBFS = -30;
 
 /**
  * The offset (dB) that takes predicted levels (dB SPL) to full-scale units: the loudest count's total as

@@ -18,6 +18,7 @@ import { PhraseForm } from "./PhraseForm";
 import { PhraseTable } from "./PhraseTable";
 import { PlanPanel } from "./PlanPanel";
 import { showKeys } from "@/components/api-keys";
+import { MusicListen } from "@/components/listen/MusicListen";
 
 export const musicKey = showKeys.music;
 
@@ -98,6 +99,9 @@ export function MusicView({ showId, initialPhraseId }: { showId: string; initial
         <div className="mt-6 space-y-6">
           <PhraseTable showId={showId} music={m} phrase={phrase} />
           <PlanPanel showId={showId} phrase={phrase} canAdopt={m.canAdopt} listeningPoints={show.data.listeningPoints} />
+          <Card title="Listen" titleId="listen-card-title">
+            <MusicListen key={phrase.id} showId={showId} show={show.data} firstSetId={phrase.firstSetId} />
+          </Card>
           <OverridesPanel showId={showId} music={m} phrase={phrase} />
         </div>
       ) : (

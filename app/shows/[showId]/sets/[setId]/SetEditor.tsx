@@ -38,6 +38,7 @@ import { TransitionPlayer } from "./TransitionPlayer";
 import { usePlayback } from "./use-playback";
 import { createLiveMix, useLiveMix, type LiveMix } from "./live-mix";
 import { firstListeningPointId } from "@/lib/show/first-choices";
+import { ListenControl } from "@/components/listen/ListenControl";
 
 /** The mix panel, showing a drag's live mix while there is one. */
 function LiveMixPanel({ live, mix, source, ...rest }: { live: LiveMix } & Parameters<typeof MixPanel>[0]) {
@@ -420,6 +421,15 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
           </div>
           <Legend flaggedBy={chosen ? (CHECK_LABELS[chosen.id] ?? chosen.id) : null} />
           {previous.data ? <TransitionPlayer playback={playback} counts={counts} from={sets[index - 1]?.number ?? ""} to={current?.number ?? ""} /> : null}
+          <ListenControl
+            showId={showId}
+            listeningPointId={lpId}
+            pointName={point?.name ?? "the listening point"}
+            sets={sets}
+            index={index}
+            versions={{ from: previous.data?.set.version ?? null, to: version }}
+            playback={previous.data ? playback : undefined}
+          />
         </div>
         <aside className="flex flex-col gap-3">
           <div className="rounded-xl border border-ink/10 bg-paper-raised px-4 py-3 shadow-sm">
