@@ -4,6 +4,7 @@ import { useState } from "react";
 import type { ShowResponse } from "@/components/api-types";
 import { DEFAULT_TEMPO_BPM, TEMPO_RANGE_BPM } from "@/lib/editor/playback";
 import { firstListeningPointId } from "@/lib/show/first-choices";
+import { ListeningPointSelect } from "@/components/ListeningPointSelect";
 import { ListenControl } from "./ListenControl";
 
 const field = "min-h-9 rounded-md border border-ink/20 bg-paper-raised px-2";
@@ -32,18 +33,7 @@ export function MusicListen({ showId, show, firstSetId }: { showId: string; show
             ))}
           </select>
         </label>
-        {show.listeningPoints.length > 1 ? (
-          <label>
-            Listening point{" "}
-            <select className={field} value={lpId ?? ""} onChange={(e) => setPointId(e.target.value)}>
-              {show.listeningPoints.map((l) => (
-                <option key={l.id} value={l.id}>
-                  {l.name}
-                </option>
-              ))}
-            </select>
-          </label>
-        ) : null}
+        <ListeningPointSelect points={show.listeningPoints} value={lpId} onChange={setPointId} />
         <label>
           Tempo without a score{" "}
           <input type="number" min={TEMPO_RANGE_BPM[0]} max={TEMPO_RANGE_BPM[1]} step={1} className={`${field} w-20 tabular-nums`} value={bpm} onChange={(e) => setBpm(Number(e.target.value))} /> counts a minute

@@ -39,6 +39,7 @@ import { usePlayback } from "./use-playback";
 import { createLiveMix, useLiveMix, type LiveMix } from "./live-mix";
 import { firstListeningPointId } from "@/lib/show/first-choices";
 import { ListenControl } from "@/components/listen/ListenControl";
+import { ListeningPointSelect } from "@/components/ListeningPointSelect";
 
 /** The mix panel, showing a drag's live mix while there is one. */
 function LiveMixPanel({ live, mix, source, ...rest }: { live: LiveMix } & Parameters<typeof MixPanel>[0]) {
@@ -276,18 +277,7 @@ export function SetEditor({ showId, setId, initialCount = null }: { showId: stri
           ) : null}
         </h1>
         <div className="flex items-center gap-3 text-sm">
-          {listeningPoints.length > 1 ? (
-            <label>
-              Listening point{" "}
-              <select className="min-h-9 rounded-md border border-ink/20 bg-paper-raised px-2" value={lpId ?? ""} onChange={(e) => setPointId(e.target.value)}>
-                {listeningPoints.map((l) => (
-                  <option key={l.id} value={l.id}>
-                    {l.name}
-                  </option>
-                ))}
-              </select>
-            </label>
-          ) : null}
+          <ListeningPointSelect points={listeningPoints} value={lpId} onChange={setPointId} />
           <span aria-live="polite" data-testid="save-status" data-status={saver.dirty ? "unsaved" : saver.status}>
             {saver.status === "error" ? "Not saved" : saver.dirty || saver.status === "saving" ? "Saving…" : editable ? "All changes saved" : null}
           </span>
