@@ -1,7 +1,7 @@
 // The score's notes as GET /api/shows/{showId}/score/notes answers them, and the notes of one span.
 import { z } from "@/lib/validation/zod";
 
-const note = z.object({ atCount: z.number().finite().min(0), lengthCounts: z.number().finite().positive(), midi: z.number().int().min(0).max(127) });
+const note = z.object({ atCount: z.number().finite().min(0), lengthCounts: z.number().finite().min(0), midi: z.number().int().min(0).max(127) });
 
 /** `{ score: null }` when the show has no score. */
 export const scoreNotesSchema = z.object({
