@@ -12,7 +12,8 @@ const setPath = (showId: string, setId: string) => `${showPath(showId)}/sets/${e
 /** What the show pages read; each view builds its key here, and its page preloads the same one. */
 export const showKeys = {
   music: (showId: string) => `${showPath(showId)}/music`,
-  sheets: (showId: string) => `${showPath(showId)}/sheets`,
+  sheets: (showId: string, by: "performers" | "sets", first?: number) => `${showPath(showId)}/sheets?by=${by}${first ? `&first=${first}` : ""}`,
+  performerSheet: (showId: string, label: string) => `${showPath(showId)}/sheets?by=performers&label=${encodeURIComponent(label)}`,
   imports: (showId: string) => `${showPath(showId)}/imports`,
   targets: (showId: string) => `${showPath(showId)}/targets`,
   rehearsalPlan: (showId: string) => `${showPath(showId)}/rehearsal-plan`,

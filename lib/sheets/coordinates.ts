@@ -59,8 +59,11 @@ function dot(label: string, p: { x: number; y: number; facingDeg: number }, rule
 /** Labels in the order a band lists them: letters, then the number (T2 before T10). */
 export const byLabel = (a: { label: string }, b: { label: string }) => a.label.localeCompare(b.label, "en", { numeric: true });
 
-export function performerSheets(file: ShowFile): PerformerSheet[] {
-  return [...file.performers].sort(byLabel).map((p) => ({
+/** The performers' sheets in label order; `first` keeps only that many, `label` only that performer's (any case). */
+export function performerSheets(file: ShowFile, only: { first?: number; label?: string } = {}): PerformerSheet[] {
+  const label = only.label?.toLowerCase();
+  const chosen = label === undefined ? file.performers : file.performers.filter((p) => p.label.toLowerCase() === label);
+  return [...chosen].sort(byLabel).slice(0, only.first ?? Infinity).map((p) => ({
     label: p.label,
     name: p.name,
     instrument: p.instrument,
@@ -83,4 +86,31 @@ export function setSheets(file: ShowFile): SetSheet[] {
     counts: s.counts,
     dots: s.positions.map((p) => dot(p.label, p, file.show.fieldRules, instrumentOf.get(p.label) ?? "")).sort(byLabel),
   }));
+}
+
+/** A set as the performers' small pictures need it: each dot and its mark, without the words. */
+export interface BareSet {
+  number: string;
+  counts: number;
+  dots: Pick<SheetDot, "label" | "x" | "y" | "facingDeg" | "spreadDeg">[];
+}
+
+function bareSets(file: ShowFile): BareSet[] {
+  const spreadOf = new Map(file.performers.map((p) => [p.label, instrumentSpreadDeg(p.instrument)]));
+  return file.sets.map((s) => ({
+    number: s.number,
+    counts: s.counts,
+    dots: s.positions.map((p) => ({ label: p.label, x: p.x, y: p.y, facingDeg: p.facingDeg, spreadDeg: spreadOf.get(p.label) ?? instrumentSpreadDeg("") })).sort(byLabel),
+  }));
+}
+
+/**
+ * What one view of the sheets shows, and how many sheets it has in all: per performer (with the
+ * sets as bare dots for their pictures; `label` for one performer's) or per set (no performers);
+ * `first` keeps that many sheets.
+ */
+export function sheetsFor(file: ShowFile, by: "performers" | "sets" = "performers", only: { first?: number; label?: string } = {}) {
+  const counts = { performerCount: file.performers.length, setCount: file.sets.length };
+  if (by === "sets") return { performers: [] as PerformerSheet[], sets: setSheets(file).slice(0, only.first ?? Infinity), ...counts };
+  return { performers: performerSheets(file, only), sets: bareSets(file), ...counts };
 }

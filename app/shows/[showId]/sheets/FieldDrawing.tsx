@@ -63,12 +63,13 @@ function FieldLines({ pic }: { pic: FieldPicture }) {
           ) : null}
         </g>
       ))}
-      {pic.hashTicks.map((t, i) => (
-        <line key={i} x1={t.x} x2={t.x} y1={t.y - pic.width / 400} y2={t.y + pic.width / 400} stroke={LINE} strokeWidth={0.3} />
-      ))}
+      {/* Some two hundred ticks as one path: as many elements made each small picture heavy. */}
+      <path data-part="hash-ticks" d={pic.hashTicks.map((t) => `M${round2(t.x)} ${round2(t.y - pic.width / 400)}V${round2(t.y + pic.width / 400)}`).join("")} stroke={LINE} strokeWidth={0.3} fill="none" />
     </>
   );
 }
+
+const round2 = (x: number) => Math.round(x * 100) / 100;
 
 /** The small pictures' width in drawing units (points: a quarter of the sheet's text width). */
 const SMALL = 127;
@@ -81,17 +82,22 @@ const bandId = (prefix: string, set: string) => `${prefix}-band-${set.replace(/[
  * 72-player show's sheets held about 90,000 dots and took seconds to open.)
  */
 export function SetBands({ rules, sets, prefix }: { rules: FieldRules; sets: { number: string; dots: PictureDot[] }[]; prefix: string }) {
+  // The field is the same in every set: drawn once, shown by reference under each set's band.
+  const field = `${prefix}-field`;
   return (
     <svg width="0" height="0" aria-hidden="true" className="absolute">
       <defs>
+        <g id={field}>
+          <FieldLines pic={smallPicture(rules, [])} />
+        </g>
         {sets.map((set) => {
           const pic = smallPicture(rules, set.dots);
           return (
             <symbol key={set.number} id={bandId(prefix, set.number)} viewBox={`0 0 ${pic.width} ${pic.height}`}>
-              <FieldLines pic={pic} />
-              {pic.dots.map((d) => (
-                <circle key={d.label} cx={d.x} cy={d.y} r={pic.dotRadius} fill="#9aa1ab" />
-              ))}
+              <use href={`#${field}`} />
+              {/* The band as one path of round dots (a zero-length stroke with round caps draws a dot): a
+                  circle element per player made the page's drawing many times heavier. */}
+              <path d={pic.dots.map((d) => `M${round2(d.x)} ${round2(d.y)}h0`).join("")} stroke="#9aa1ab" strokeWidth={round2(2 * pic.dotRadius)} strokeLinecap="round" fill="none" data-dots={pic.dots.length} />
             </symbol>
           );
         })}

@@ -13,23 +13,32 @@ import { PageTitle } from "@/components/PageTitle";
 import { useApi } from "@/components/use-api";
 import { ShowNav } from "@/components/ShowNav";
 import type { FieldRules } from "@/lib/field/geometry";
-import type { PerformerSheet, SetSheet } from "@/lib/sheets/coordinates";
+import type { BareSet, PerformerSheet, SetSheet } from "@/lib/sheets/coordinates";
 import { MARK_KEY } from "@/lib/sheets/mark-key";
 import { FieldDrawing, MySpot, SetBands } from "./FieldDrawing";
 import { showKeys } from "@/components/api-keys";
+import { FIRST_SHEETS, SHEETS_PER_BATCH } from "./sheet-batches";
 
-type Sheets = { programName: string; show: { id: string; name: string; fieldRules: FieldRules }; performers: PerformerSheet[]; sets: SetSheet[] };
+type Sheets = {
+  programName: string;
+  show: { id: string; name: string; fieldRules: FieldRules };
+  performers: PerformerSheet[];
+  /** With words per set; bare dots on the performer view. */
+  sets: (SetSheet | BareSet)[];
+  performerCount: number;
+  setCount: number;
+};
 
-
-const FIRST_SHEETS = 4;
-const SHEETS_PER_BATCH = 6;
 
 export function SheetsView({ showId, by }: { showId: string; by: "performers" | "sets" }) {
-  const sheets = useApi<Sheets>(showKeys.sheets(showId));
+  const opening = useApi<Sheets>(showKeys.sheets(showId, by, FIRST_SHEETS));
+  const whole = useApi<Sheets>(showKeys.sheets(showId, by));
+  const sheets = whole.data || !opening.data ? whole : opening;
+  const wholeCount = by === "performers" ? opening.data?.performerCount : opening.data?.setCount;
   const bands = `sheets${useId().replace(/[^A-Za-z0-9]/g, "")}`;
   // A show's performer sheets are thousands of elements: the first few arrive with the page, the rest
   // follow in batches so the page is usable at once; printing first draws them all.
-  const total = sheets.data?.performers.length ?? 0;
+  const total = (by === "performers" ? sheets.data?.performers.length : sheets.data?.sets.length) ?? 0;
   const [shown, setShown] = useState(FIRST_SHEETS);
   useEffect(() => {
     if (shown >= total) return;
@@ -41,7 +50,7 @@ export function SheetsView({ showId, by }: { showId: string; by: "performers" | 
     window.addEventListener("beforeprint", all);
     return () => window.removeEventListener("beforeprint", all);
   }, []);
-  if (sheets.error) return <ErrorState error={sheets.error} what="show" onRetry={() => sheets.mutate()} />;
+  if (whole.error) return <ErrorState error={whole.error} what="show" onRetry={() => whole.mutate()} />;
   const data = sheets.data;
   const setsByNumber = new Map((data?.sets ?? []).map((s) => [s.number, s]));
   const name = data?.show.name ?? "Show";
@@ -62,6 +71,7 @@ export function SheetsView({ showId, by }: { showId: string; by: "performers" | 
           {tab("sets", "A sheet per set")}
           <Button
             variant="secondary"
+            disabled={!whole.data}
             onClick={() => {
               flushSync(() => setShown(Infinity));
               window.print();
@@ -136,7 +146,7 @@ export function SheetsView({ showId, by }: { showId: string; by: "performers" | 
         </div>
       ) : (
         <div className="space-y-8">
-          {data.sets.map((s) => (
+          {(data.sets as SetSheet[]).slice(0, shown).map((s) => (
             <section key={s.number} className="print-sheet rounded-xl border border-ink/10 bg-paper-raised p-6" aria-labelledby={`set-${s.number}`}>
               <p className="text-sm text-ink-soft">
                 {data.programName} · {data.show.name}
@@ -162,6 +172,11 @@ export function SheetsView({ showId, by }: { showId: string; by: "performers" | 
           ))}
         </div>
       )}
+      {data && shown < (wholeCount ?? total) ? (
+        <p role="status" className="no-print mt-6 text-ink-soft">
+          Preparing the other {plural((wholeCount ?? total) - Math.min(shown, total), by === "performers" ? "sheet" : "set sheet")}…
+        </p>
+      ) : null}
     </>
   );
 }

@@ -9,14 +9,14 @@ import { MiniField } from "@/components/MiniField";
 import { PageTitle } from "@/components/PageTitle";
 import { SkeletonCard } from "@/components/Skeleton";
 import { useApi } from "@/components/use-api";
-import type { PerformerSheet, SetSheet } from "@/lib/sheets/coordinates";
+import type { BareSet, PerformerSheet } from "@/lib/sheets/coordinates";
 import { instrumentName } from "../../instrument-options";
 import { showKeys } from "@/components/api-keys";
 
-type Sheets = { show: { id: string; name: string }; performers: PerformerSheet[]; sets: SetSheet[] };
+type Sheets = { show: { id: string; name: string }; performers: PerformerSheet[]; sets: BareSet[] };
 
 export function PerformerDots({ showId, label }: { showId: string; label: string }) {
-  const sheets = useApi<Sheets>(showKeys.sheets(showId));
+  const sheets = useApi<Sheets>(showKeys.performerSheet(showId, label));
   const crumbs = [
     { label: "Programs", href: "/programs" },
     { label: sheets.data?.show.name ?? "Show", href: `/shows/${showId}` },

@@ -11,11 +11,12 @@ export const metadata: Metadata = { title: "My dots" };
 export default async function PerformerPage({ params }: PageProps<"/shows/[showId]/performer/[label]">) {
   const { showId, label } = await params;
   const user = await requireSignedIn(`/shows/${encodeURIComponent(showId)}/performer/${encodeURIComponent(label)}`);
-  const answers = await preloadShowPage(showId, () => [showKeys.sheets(showId)]);
+  const performer = decodeURIComponent(label);
+  const answers = await preloadShowPage(showId, () => [showKeys.performerSheet(showId, performer)]);
   return (
     <PageShell userName={user.name}>
       <Preloaded answers={answers}>
-        <PerformerDots showId={showId} label={decodeURIComponent(label)} />
+        <PerformerDots showId={showId} label={performer} />
       </Preloaded>
     </PageShell>
   );
