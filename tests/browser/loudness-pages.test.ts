@@ -59,8 +59,8 @@ describe("loudness on the balance pages", () => {
     expect(await sections.locator("tbody tr").count()).toBe(new Set([...Object.keys(six.loudness.sections), ...Object.keys(analysis.loudness.sections)]).size);
     const clarinets = sections.getByRole("row", { name: /^Clarinets/ });
     expect(await clarinets.locator("td").nth(1).textContent()).toContain(`${analysis.loudness.sections.Clarinets.sone.toFixed(1)} sones`);
-    // Two bars a row in each chart.
-    expect(await page.locator(".recharts-bar-rectangle").count()).toBeGreaterThan(4);
+    // Two bars a row in each chart (drawn once the chart's script has loaded after the page).
+    await expect.poll(() => page.locator(".recharts-bar-rectangle").count(), { timeout: 30_000 }).toBeGreaterThan(4);
     await page.screenshot({ path: path.join(SHOTS, "compare-loudness-bars.png"), fullPage: true });
     expect(problems).toEqual([]);
   });

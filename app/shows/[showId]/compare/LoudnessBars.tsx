@@ -1,11 +1,13 @@
 "use client";
 // Loudness (sones) of each voice or section in the two compared sets, as pairs of bars, with the same figures in a table for screen readers.
-import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import dynamic from "next/dynamic";
+import { ChartLoading } from "@/components/ChartLoading";
 import { formatSone } from "../music/voices";
 
 export type LoudnessRow = { key: string; name: string; a: number | null; b: number | null; heardA: boolean | null; heardB: boolean | null };
 
-const SET_COLORS = ["#0072B2", "#D55E00"]; // Okabe–Ito blue and vermilion: apart for the common colour-vision deficiencies
+const LoudnessChart = dynamic(() => import("./LoudnessChart").then((m) => m.LoudnessChart), { ssr: false, loading: () => <ChartLoading height="100%" /> });
+
 const heardWords = (heard: boolean | null) => (heard === null ? "" : heard ? "" : " (masked)");
 
 export function LoudnessBars({ rows, setA, setB, caption }: { rows: LoudnessRow[]; setA: string; setB: string; caption: string }) {
@@ -15,17 +17,7 @@ export function LoudnessBars({ rows, setA, setB, caption }: { rows: LoudnessRow[
   return (
     <figure>
       <div style={{ height }} aria-hidden="true">
-        <ResponsiveContainer width="100%" height="100%">
-          <BarChart data={data} layout="vertical" margin={{ top: 8, right: 24, bottom: 8, left: 8 }}>
-            <CartesianGrid strokeDasharray="3 3" stroke="#d9d7cf" />
-            <XAxis type="number" unit=" sone" domain={[0, "auto"]} />
-            <YAxis type="category" dataKey="name" width={136} />
-            <Tooltip formatter={(v) => `${formatSone(typeof v === "number" ? v : null)} sone`} />
-            <Legend />
-            <Bar dataKey="a" name={`Set ${setA}`} fill={SET_COLORS[0]} isAnimationActive={false} />
-            <Bar dataKey="b" name={`Set ${setB}`} fill={SET_COLORS[1]} isAnimationActive={false} />
-          </BarChart>
-        </ResponsiveContainer>
+        <LoudnessChart data={data} setA={setA} setB={setB} />
       </div>
       {masked.length ? <p className="mt-2 text-sm text-signal-warn">Masked by the rest and the background: {masked.join(", ")}.</p> : null}
       <table className="sr-only">

@@ -7,9 +7,12 @@ import { ApiError, sendJson } from "@/components/fetcher";
 import { FormMessage } from "@/components/FormMessage";
 import { signedDb } from "@/components/format";
 import type { ApiState } from "@/components/use-api";
-import { FitChart } from "./FitChart";
 import type { FitInstrument, FitResponse, Reading } from "./readings-types";
 import { useLocalTimes } from "@/components/local-time";
+import dynamic from "next/dynamic";
+import { ChartLoading } from "@/components/ChartLoading";
+
+const FitChart = dynamic(() => import("./FitChart").then((m) => m.FitChart), { ssr: false, loading: () => <ChartLoading height={300} /> });
 
 const db1 = (x: number) => (Math.round(x * 10) / 10).toFixed(1);
 

@@ -13,10 +13,13 @@ import { apiKeys, useApi } from "@/components/use-api";
 import { ShowNav } from "@/components/ShowNav";
 import { CHECK_LABELS, VOICE_LABELS, formatDb, formatSone } from "../music/voices";
 import type { Measure, TimelineResponse, TimelineSample } from "./timeline-types";
-import { VoiceChart } from "./VoiceChart";
 import { showKeys } from "@/components/api-keys";
 import { firstListeningPointId } from "@/lib/show/first-choices";
 import { SweepProgress } from "@/components/SweepProgress";
+import dynamic from "next/dynamic";
+import { ChartLoading } from "@/components/ChartLoading";
+
+const VoiceChart = dynamic(() => import("./VoiceChart").then((m) => m.VoiceChart), { ssr: false, loading: () => <ChartLoading /> });
 
 const CHECKS = Object.keys(CHECK_LABELS);
 
