@@ -1,16 +1,12 @@
 "use client";
 // The placeholder of a page waiting on the show's transition sweeps (the timeline): how many of the
 // transitions that changed are worked out so far, asked twice a second while the page waits.
-import useSWR from "swr";
-import type { WorkProgress } from "@/lib/analysis/work-progress-types";
-import { workProgressKey } from "./api-keys";
-import { fetcher } from "./fetcher";
 import { plural } from "./format";
 import { SkeletonBar, SkeletonCard } from "./Skeleton";
+import { useWorkProgress } from "./use-work-progress";
 
 export function SweepProgress({ showId, label }: { showId: string; label: string }) {
-  const { data } = useSWR<{ sweeps: WorkProgress | null }>(workProgressKey(showId), fetcher, { refreshInterval: 500, dedupingInterval: 400 });
-  const p = data?.sweeps;
+  const p = useWorkProgress(showId, "sweeps");
   if (!p || p.total === 0) return <SkeletonCard rows={8} label={label} />;
   return (
     <div role="status" aria-live="polite" className="rounded-xl border border-ink/10 bg-paper-raised p-5 shadow-sm" data-testid="sweep-progress">

@@ -1,5 +1,5 @@
 // How far long whole-show work has got, for the pages that wait on it (the timeline's "3 of 17
-// transitions"). Kept in this process's memory: the request doing the work and the page asking for
+// transitions", the rehearsal plan's "2 of 8 phrases"). Kept in this process's memory: the request doing the work and the page asking for
 // its progress reach the same server process in the deployments we ship (one Node process).
 import "server-only";
 
@@ -10,6 +10,8 @@ export type { WorkProgress };
 const running = new Map<string, WorkProgress>();
 
 export const sweepWork = (showId: string) => `sweeps:${showId}`;
+/** The balance plans of the phrases a rehearsal plan takes in. */
+export const planWork = (showId: string) => `plans:${showId}`;
 
 /** Tracks `work` under `key` while it runs; `work` reports through the callback it is given. */
 export async function withProgress<T>(key: string, work: (report: (done: number, total: number) => void) => Promise<T>): Promise<T> {

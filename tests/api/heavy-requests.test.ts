@@ -11,7 +11,7 @@ beforeAll(async () => {
 }, 60_000);
 
 /** A show file of `performers` players (the demo's instruments) moving between random spots over sets of the given counts. */
-function syntheticShow(name: string, performers: number, counts: number[], listeningPoints = 1, placed = true) {
+function syntheticShow(name: string, performers: number, counts: number[], listeningPoints = 1, placed = true, phrasePerSet = false) {
   const demo = copy.original;
   const roster = Array.from({ length: performers }, (_, i) => {
     const model = demo.performers[i % demo.performers.length];
@@ -26,7 +26,16 @@ function syntheticShow(name: string, performers: number, counts: number[], liste
     listeningPoints: Array.from({ length: listeningPoints }, (_, i) => ({ name: `Point ${i + 1}`, x: -20 + 10 * i, y: -25, z: 18, order: i + 1 })),
     performers: roster,
     movements: [],
-    phrases: [],
+    // With phrasePerSet, every set is a phrase of its own with every section voiced (the first carries the melody).
+    phrases: phrasePerSet
+      ? counts.map((_c, s) => ({
+          name: `Phrase ${s + 1}`,
+          firstSet: String(s + 1),
+          lastSet: String(s + 1),
+          voices: [...new Set(roster.map((p) => p.section))].map((section, i) => ({ section, voice: i === 0 ? "melody" : "accompaniment", writtenDynamic: "mf", playedDynamic: null })),
+          overrides: [],
+        }))
+      : [],
     sets: counts.map((c, s) => ({
       number: String(s + 1),
       counts: c,
@@ -80,6 +89,30 @@ describe("whole-show work runs off the request thread", () => {
     expect(progress.map((p) => p.done)).toEqual([...progress.map((p) => p.done)].sort((a, b) => a - b));
     expect(new Set(progress.map((p) => p.done)).size, "progress moved while the work ran").toBeGreaterThan(1);
     expect((await copy.director.get(`/api/shows/${showId}/work-progress`)).body.sweeps).toBeNull();
+  }, 180_000);
+});
+
+describe("a rehearsal plan over many phrases", () => {
+  it("says how many of its phrases are planned while it works", async () => {
+    const { showId, pointId } = await importShow(syntheticShow("Many phrases", 150, Array.from({ length: 24 }, (_, i) => (i ? 16 : 0)), 1, true, true));
+    const phraseIds = (await copy.director.get(`/api/shows/${showId}/music`)).body.phrases.map((p: { id: string }) => p.id);
+    expect(phraseIds.length).toBe(24);
+    let done = false;
+    const building = copy.director.post(`/api/shows/${showId}/rehearsal-plan`, { phraseIds, setIds: [], listeningPointId: pointId }).finally(() => (done = true));
+    const progress: { done: number; total: number }[] = [];
+    while (!done) {
+      const seen = await copy.director.get(`/api/shows/${showId}/work-progress`);
+      expect(seen.status).toBe(200);
+      if (seen.body.plans && !done) progress.push(seen.body.plans);
+      await new Promise((r) => setTimeout(r, 20));
+    }
+    const built = await building;
+    expect(built.status, JSON.stringify(built.body).slice(0, 300)).toBe(200);
+    expect(built.body.items.length).toBe(24);
+    expect(progress.length).toBeGreaterThan(0);
+    expect(progress.every((p) => p.total === 24 && p.done >= 0 && p.done <= 24)).toBe(true);
+    expect(progress.map((p) => p.done)).toEqual([...progress.map((p) => p.done)].sort((a, b) => a - b));
+    expect((await copy.director.get(`/api/shows/${showId}/work-progress`)).body.plans).toBeNull();
   }, 180_000);
 });
 

@@ -16,6 +16,7 @@ import { NextStepNotice } from "@/components/NextStepNotice";
 import { PageTitle } from "@/components/PageTitle";
 import { ROLE_WORDS } from "@/components/RoleBadge";
 import { useApi } from "@/components/use-api";
+import { PlanProgress } from "./PlanProgress";
 import { ShowNav } from "@/components/ShowNav";
 import type { Role } from "@/lib/auth/permissions";
 import { CHECK_LABELS } from "@/lib/music/check-labels";
@@ -45,6 +46,7 @@ export function RehearsalView({ showId, initial }: { showId: string; initial: { 
   const [plan, setPlan] = useState<Plan | null>(null);
   const [status, setStatus] = useState<{ tone: "info" | "bad"; text: string } | null>(null);
   const [busy, setBusy] = useState(false);
+  const [building, setBuilding] = useState(false);
   const [recipients, setRecipients] = useState<string[]>([]);
   const [budget, setBudget] = useState("30");
   const [planName, setPlanName] = useState("");
@@ -65,7 +67,8 @@ export function RehearsalView({ showId, initial }: { showId: string; initial: { 
   }
   async function build() {
     setBusy(true);
-    setStatus({ tone: "info", text: "Working out the plan…" });
+    setBuilding(true);
+    setStatus(null);
     try {
       setPlan(await sendJson<Plan>(`/api/shows/${showId}/rehearsal-plan`, "POST", choice()));
       setStatus(null);
@@ -73,6 +76,7 @@ export function RehearsalView({ showId, initial }: { showId: string; initial: { 
       setStatus({ tone: "bad", text: errorText(err, "The plan could not be made. Try again.") });
     } finally {
       setBusy(false);
+      setBuilding(false);
     }
   }
   async function send() {
@@ -157,9 +161,13 @@ export function RehearsalView({ showId, initial }: { showId: string; initial: { 
                   </Button>
                 ) : null}
               </div>
-              <FormMessage id="plan-status" tone={status?.tone ?? "info"}>
-                {status?.text ?? ""}
-              </FormMessage>
+              {building ? (
+                <PlanProgress showId={showId} />
+              ) : (
+                <FormMessage id="plan-status" tone={status?.tone ?? "info"}>
+                  {status?.text ?? ""}
+                </FormMessage>
+              )}
             </Card>
             {o.canSend ? (
               <Card title="Send to staff" titleId="send-title">

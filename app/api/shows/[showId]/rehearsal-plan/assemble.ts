@@ -6,6 +6,7 @@ import { listListeningPoints, listSets } from "@/db/queries/shows";
 import type { Show } from "@/db/schema";
 import { runPhrasePlan } from "@/lib/analysis/run-phrase-plan";
 import { loadShowBalance } from "@/lib/analysis/show-context";
+import { planWork, withProgress } from "@/lib/analysis/work-progress";
 import { storedAnalysis } from "@/lib/analysis/stored-analysis";
 import { describeListeningPoint } from "@/lib/field/point-words";
 import { badRequest } from "@/lib/http/errors";
@@ -40,34 +41,42 @@ export async function assembleRehearsalPlan(show: Show, choice: RehearsalChoice)
     });
   };
 
-  // The same plan and words as the music page: each phrase's plan over all its sets.
+  // The same plan and words as the music page: each phrase's plan over all its sets. One phrase's
+  // plan can take a second on a large band, so the page can show how many are done.
   const balance = choice.phraseIds.length || choice.setIds.length ? await loadShowBalance(show) : null;
-  const plans = new Map<string, RehearsalItemInput["plan"]>();
-  const planOf = async (phraseId: string | undefined) => {
-    if (!phraseId || !balance) return undefined;
-    if (!plans.has(phraseId)) {
-      const p = await runPhrasePlan(balance, phraseId, point.id);
-      plans.set(phraseId, { entries: p.entries, unmet: p.unmet.map((u) => u.detail) });
+  const chosenPhrases = music.phrases.filter((p) => choice.phraseIds.includes(p.id));
+  const chosenSets = sets.filter((s) => choice.setIds.includes(s.id));
+  const planned = new Set([...chosenPhrases.map((p) => p.id), ...chosenSets.flatMap((s) => phraseAt(music.phrases, s.order)?.id ?? [])]);
+  const items = await withProgress(planWork(show.id), async (report) => {
+    const plans = new Map<string, RehearsalItemInput["plan"]>();
+    const planOf = async (phraseId: string | undefined) => {
+      if (!phraseId || !balance) return undefined;
+      if (!plans.has(phraseId)) {
+        const p = await runPhrasePlan(balance, phraseId, point.id);
+        plans.set(phraseId, { entries: p.entries, unmet: p.unmet.map((u) => u.detail) });
+        report(plans.size, planned.size);
+      }
+      return plans.get(phraseId);
+    };
+    report(0, planned.size);
+    const items: RehearsalItemInput[] = [];
+    for (const phrase of chosenPhrases) {
+      const span = sets.filter((s) => s.order >= phrase.firstOrder && s.order <= phrase.lastOrder);
+      items.push({ kind: "phrase", name: phrase.name, sets: await Promise.all(span.map(analysisOf)), sections: sectionsOf(phrase.id), plan: await planOf(phrase.id) });
     }
-    return plans.get(phraseId);
-  };
-
-  const items: RehearsalItemInput[] = [];
-  for (const phrase of music.phrases.filter((p) => choice.phraseIds.includes(p.id))) {
-    const span = sets.filter((s) => s.order >= phrase.firstOrder && s.order <= phrase.lastOrder);
-    items.push({ kind: "phrase", name: phrase.name, sets: await Promise.all(span.map(analysisOf)), sections: sectionsOf(phrase.id), plan: await planOf(phrase.id) });
-  }
-  for (const set of sets.filter((s) => choice.setIds.includes(s.id))) {
-    const phrase = phraseAt(music.phrases, set.order);
-    const sections = sectionsOf(phrase?.id ?? null);
-    items.push({
-      kind: "set",
-      name: `Set ${set.number}${phrase ? ` (in ${phrase.name})` : ""}`,
-      sets: [await analysisOf(set)],
-      sections: sections.length ? sections : [],
-      plan: await planOf(phrase?.id),
-    });
-  }
+    for (const set of chosenSets) {
+      const phrase = phraseAt(music.phrases, set.order);
+      const sections = sectionsOf(phrase?.id ?? null);
+      items.push({
+        kind: "set",
+        name: `Set ${set.number}${phrase ? ` (in ${phrase.name})` : ""}`,
+        sets: [await analysisOf(set)],
+        sections: sections.length ? sections : [],
+        plan: await planOf(phrase?.id),
+      });
+    }
+    return items;
+  });
   const budgetMinutes = choice.budgetMinutes ?? DEFAULT_BUDGET_MINUTES;
   const built = buildRehearsalPlan(items);
   const minutes = shareMinutes(built.map((it) => ({ severity: it.severity, buildUpSteps: it.buildUp.length })), budgetMinutes);
