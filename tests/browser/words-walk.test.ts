@@ -64,6 +64,9 @@ describe("the demo show in the trade's words", () => {
       const text = await pageText(session, `${APP_URL}/sign-in`);
       expect(wordProblems(text)).toEqual([]);
       expect(text).not.toMatch(/Hear your drill/i);
+      // It says what the product does, and now that includes the score in and the sound out.
+      expect(text).toMatch(/MusicXML/);
+      expect(text).toMatch(/listen to what the press box is predicted to hear/);
     } finally {
       await session.close();
     }

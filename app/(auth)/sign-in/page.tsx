@@ -16,7 +16,7 @@ export default async function SignInPage({ searchParams }: PageProps<"/sign-in">
   return (
     <AuthFrame
       title="Sign in"
-      intro="Place your drill set by set and see what the press box is predicted to hear, before you get stadium time."
+      intro="Place your drill set by set, import your arrangement's MusicXML, then see and listen to what the press box is predicted to hear, before you get stadium time."
       footer={
         <>
           <Link href="/reset" className="inline-flex min-h-11 items-center font-semibold text-turf-dark underline underline-offset-4">
