@@ -9,6 +9,7 @@ import { GET as programShows } from "@/app/api/programs/[programId]/shows/route"
 import { GET as compare } from "@/app/api/shows/[showId]/compare/route";
 import { GET as imports } from "@/app/api/shows/[showId]/imports/route";
 import { GET as music } from "@/app/api/shows/[showId]/music/route";
+import { GET as score } from "@/app/api/shows/[showId]/score/route";
 import { GET as readings } from "@/app/api/shows/[showId]/readings/route";
 import { GET as rehearsalPlan } from "@/app/api/shows/[showId]/rehearsal-plan/route";
 import { GET as keptPlan } from "@/app/api/shows/[showId]/rehearsal-plans/[planId]/route";
@@ -37,6 +38,7 @@ const ROUTES: { path: RegExp; params: string[]; get: GetHandler }[] = [
   { path: new RegExp(`^/api/shows/${ID}/compare$`), params: ["showId"], get: compare },
   { path: new RegExp(`^/api/shows/${ID}/imports$`), params: ["showId"], get: imports },
   { path: new RegExp(`^/api/shows/${ID}/music$`), params: ["showId"], get: music },
+  { path: new RegExp(`^/api/shows/${ID}/score$`), params: ["showId"], get: score },
   { path: new RegExp(`^/api/shows/${ID}/readings$`), params: ["showId"], get: readings },
   { path: new RegExp(`^/api/shows/${ID}/rehearsal-plan$`), params: ["showId"], get: rehearsalPlan },
   { path: new RegExp(`^/api/shows/${ID}/rehearsal-plans$`), params: ["showId"], get: rehearsalPlans },

@@ -12,6 +12,7 @@ const setPath = (showId: string, setId: string) => `${showPath(showId)}/sets/${e
 /** What the show pages read; each view builds its key here, and its page preloads the same one. */
 export const showKeys = {
   music: (showId: string) => `${showPath(showId)}/music`,
+  score: (showId: string) => `${showPath(showId)}/score`,
   sheets: (showId: string, by: "performers" | "sets", first?: number) => `${showPath(showId)}/sheets?by=${by}${first ? `&first=${first}` : ""}`,
   performerSheet: (showId: string, label: string) => `${showPath(showId)}/sheets?by=performers&label=${encodeURIComponent(label)}`,
   imports: (showId: string) => `${showPath(showId)}/imports`,

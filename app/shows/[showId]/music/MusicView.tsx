@@ -17,6 +17,8 @@ import { OverridesPanel } from "./OverridesPanel";
 import { PhraseForm } from "./PhraseForm";
 import { PhraseTable } from "./PhraseTable";
 import { PlanPanel } from "./PlanPanel";
+import { ScorePanel } from "./ScorePanel";
+import { WrittenBySet } from "./WrittenBySet";
 import { showKeys } from "@/components/api-keys";
 import { MusicListen } from "@/components/listen/MusicListen";
 
@@ -95,6 +97,10 @@ export function MusicView({ showId, initialPhraseId }: { showId: string; initial
         ) : null}
         <FormMessage id="phrases-status" tone="info">{status}</FormMessage>
       </Card>
+      <div className="mt-6 space-y-6">
+        <ScorePanel showId={showId} canEdit={m.canEdit} />
+        {m.phrases.length ? <WrittenBySet music={m} /> : null}
+      </div>
       {phrase ? (
         <div className="mt-6 space-y-6">
           <PhraseTable showId={showId} music={m} phrase={phrase} />

@@ -12,7 +12,7 @@ export default async function MusicPage({ params, searchParams }: { params: Prom
   const { showId } = await params;
   const { phrase } = await searchParams;
   const user = await requireSignedIn(`/shows/${encodeURIComponent(showId)}/music`);
-  const answers = await preloadShowPage(showId, () => [showKeys.music(showId)]);
+  const answers = await preloadShowPage(showId, () => [showKeys.music(showId), showKeys.score(showId)]);
   return (
     <PageShell userName={user.name}>
       <Preloaded answers={answers}>
