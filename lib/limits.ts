@@ -21,6 +21,10 @@ export const MAX_DRILL_ROWS = 20_000;
 
 /** One MusicXML score upload (.musicxml, .xml or compressed .mxl), as sent (413 past it). */
 export const MAX_SCORE_BYTES = 4_000_000;
+/** A score's text once an .mxl is unzipped, its measures as played (repeats expanded) and its notes (400 past them). */
+export const MAX_SCORE_TEXT_BYTES = 20_000_000;
+export const MAX_SCORE_MEASURES = 2_000;
+export const MAX_SCORE_NOTES = 200_000;
 
 /** Largest show file accepted for import (bytes). */
 export const MAX_SHOW_FILE_BYTES = 8_000_000;

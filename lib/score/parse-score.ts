@@ -1,6 +1,7 @@
 // A MusicXML score (partwise; .musicxml, .xml or .mxl) read into Farfield's Score: measures as
 // played with their counts, tempo in counts a minute, each part's notes, dynamics, wedges and hints,
 // and the rehearsal marks and double bars that suggest phrases. Pure.
+import { MAX_SCORE_MEASURES, MAX_SCORE_NOTES } from "@/lib/limits";
 import { ScoreError } from "./errors";
 import { beatQuarters, measureQuarters } from "./meter";
 import { readMeasure, type MeasureEvents, type PartState } from "./part-events";
@@ -8,10 +9,6 @@ import { scoreText } from "./read-file";
 import { measureFlow, playingOrder } from "./repeats";
 import type { Score, ScoreBoundary, ScoreMeasure, ScorePart, TempoMark } from "./types";
 import { child, childrenNamed, childText, parseXml, type XmlElement } from "./xml-tree";
-
-/** Measures a score may play (repeats expanded) and notes it may hold (README, "Limits"). */
-export const MAX_SCORE_MEASURES = 2_000;
-export const MAX_SCORE_NOTES = 200_000;
 
 // When a score gives no tempo at all (common practice, no source: a moderate march tempo).
 const DEFAULT_QUARTERS_PER_MINUTE = 120;

@@ -1,11 +1,9 @@
 // The MusicXML text of an uploaded file: plain .musicxml/.xml, or compressed .mxl (a zip whose
 // META-INF/container.xml names the score, W3C MusicXML 4.0 "container.xml" reference). Pure.
 import { strFromU8, unzipSync } from "fflate";
+import { MAX_SCORE_TEXT_BYTES } from "@/lib/limits";
 import { ScoreError } from "./errors";
 import { child, childrenNamed, parseXml } from "./xml-tree";
-
-/** Largest uncompressed score text read out of an .mxl (bytes). */
-export const MAX_SCORE_TEXT_BYTES = 20_000_000;
 
 const isZip = (b: Uint8Array) => b.length > 3 && b[0] === 0x50 && b[1] === 0x4b && b[2] === 0x03 && b[3] === 0x04;
 
