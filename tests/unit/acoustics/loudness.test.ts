@@ -138,15 +138,52 @@ describe("loudnessIso532_1: behaviour", () => {
     expect(Math.abs(integral - total) / total).toBeLessThan(0.01);
   });
 
-  it("refuses a wrong number of bands, NaN and +Infinity, naming the field", () => {
-    expect(() => loudnessIso532_1(new Array(27).fill(60))).toThrow(/thirdOctaveDb/);
+  it("so does the pattern of a loud pure tone, most of it on the upper slope (250 Hz, 1 kHz and 4 kHz at 80 dB)", () => {
+    for (const hz of [250, 1000, 4000]) {
+      const core = new Float64Array(21);
+      coreLoudnessInto(sineThirdOctaveLevels(hz, 80), "free", core);
+      const specific = new Float64Array(SPECIFIC_LOUDNESS_POINTS);
+      const total = totalLoudnessFromCore(core, specific);
+      const integral = specific.reduce((sum, n) => sum + n, 0) * 0.1;
+      expect(Math.abs(integral - total) / total, `${hz} Hz`).toBeLessThan(0.02);
+      // Down the slope above the tone the pattern only falls.
+      const peak = specific.indexOf(Math.max(...specific));
+      for (let k = peak + 12; k < SPECIFIC_LOUDNESS_POINTS; k++) expect(specific[k]!).toBeLessThanOrEqual(specific[k - 1]! + 1e-12);
+    }
+  });
+
+  it("refuses a wrong number of bands, NaN, +Infinity and a value that is no number, naming the field and what it must be", () => {
+    // The count itself is named: a short list fails on its length, not on its first missing value.
+    expect(() => loudnessIso532_1(new Array(27).fill(60))).toThrow(/^thirdOctaveDb must hold 28 third-octave levels/);
+    expect(() => loudnessIso532_1(new Array(29).fill(60))).toThrow(/must hold 28 third-octave levels/);
     const nan = silence();
     nan[3] = Number.NaN;
-    expect(() => loudnessIso532_1(nan)).toThrow(/thirdOctaveDb\[3\]/);
+    expect(() => loudnessIso532_1(nan)).toThrow(/thirdOctaveDb\[3\] must be a number in dB/);
     const inf = silence();
     inf[27] = Infinity;
     expect(() => loudnessIso532_1(inf)).toThrow(/thirdOctaveDb\[27\]/);
-    expect(() => loudnessIso532_1(TEST_SIGNAL_1, "outdoor" as "free")).toThrow(/field/);
+    const text = silence() as unknown[];
+    text[0] = "60";
+    expect(() => loudnessIso532_1(text as number[])).toThrow(/thirdOctaveDb\[0\] must be a number/);
+    expect(() => loudnessIso532_1(TEST_SIGNAL_1, "outdoor" as "free")).toThrow(/field must be "free" or "diffuse"/);
+  });
+
+  it("keeps counting above the last range of the low-frequency table (Table A.3 ends at 120 dB; its last row applies, as in the standard's program)", () => {
+    const lowAt = (db: number) => loudnessIso532_1(TEST_SIGNAL_1.map((l, i) => (i < 11 ? db : l)));
+    const at120 = lowAt(120).sone;
+    const at130 = lowAt(130).sone;
+    expect(Number.isFinite(at130)).toBe(true);
+    expect(at130).toBeGreaterThan(at120);
+  });
+
+  it("overwrites a reused specific-loudness pattern everywhere: zero above where the sound ends", () => {
+    // A 1 kHz tone at 60 dB excites nothing near 24 Bark; a pattern array left from a louder sound must not keep its values.
+    const core = new Float64Array(21);
+    coreLoudnessInto(sineThirdOctaveLevels(1000, 60), "free", core);
+    const specific = new Float64Array(SPECIFIC_LOUDNESS_POINTS).fill(7);
+    totalLoudnessFromCore(core, specific);
+    expect(specific.slice(200)).toEqual(new Float64Array(40));
+    expect(specific.every((n) => n < 7)).toBe(true);
   });
 
   it("accepts a Float64Array", () => {
