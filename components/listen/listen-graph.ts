@@ -1,11 +1,12 @@
-// The Listen sound: one synthesized voice per part, shaped by an octave filter bank to the part's band
+// The Listen sound: one synthesized voice per part, shaped by an octave equaliser to the part's band
 // levels at the listening point, delayed by its arrival, switched by A/B, solo and mute, then normalised
 // and limited. It builds on any BaseAudioContext, so the browser tests render the very same graph offline.
 import { OCTAVE_BANDS } from "@/lib/acoustics/bands";
 import { midiHz } from "@/lib/listen/chords";
 import { secondsAt } from "@/lib/listen/count-times";
 import type { ListenSchedule, PartPlan } from "@/lib/listen/schedule";
-import { bandGains, burstMeanSquare, chordBandPower, OCTAVE_Q, whiteNoiseBandPower } from "@/lib/listen/source-power";
+import { fitEqualiser, sawtoothTones, sourcePoints, type Equaliser, type SourceSpectrum } from "@/lib/listen/equaliser";
+import { burstMeanSquare, OCTAVE_Q } from "@/lib/listen/source-power";
 
 export type AB = "written" | "plan";
 
@@ -62,20 +63,29 @@ function hardClip(ctx: BaseAudioContext, ceiling: number): WaveShaperNode {
   return shaper;
 }
 
-/** Eight band-pass filters in parallel, each with its gain node, from `input` into one sum. */
-function filterBank(ctx: BaseAudioContext, input: AudioNode) {
-  const sum = ctx.createGain();
-  const gains = OCTAVE_BANDS.map(({ exactHz }) => {
+/** A flat gain and eight octave peaking filters in cascade, from `input`; `out` is the last filter. */
+function equaliser(ctx: BaseAudioContext, input: AudioNode) {
+  const flat = ctx.createGain();
+  flat.gain.value = 0;
+  let node: AudioNode = input.connect(flat);
+  const bands = OCTAVE_BANDS.map(({ exactHz }) => {
     const f = ctx.createBiquadFilter();
-    f.type = "bandpass";
+    f.type = "peaking";
     f.frequency.value = exactHz;
     f.Q.value = OCTAVE_Q;
-    const g = ctx.createGain();
-    g.gain.value = 0;
-    input.connect(f).connect(g).connect(sum);
-    return g;
+    f.gain.value = 0;
+    node = node.connect(f);
+    return f;
   });
-  return { sum, gains };
+  return { flat, bands, out: node };
+}
+
+const amplitude = (db: number) => (db > -Infinity ? 10 ** (db / 20) : 0);
+
+/** The equaliser a fraction t of the way from a to b, in dB (the fit is close to linear in the levels, which move in dB). */
+function between(a: Equaliser, b: Equaliser, t: number): Equaliser {
+  const mix = (x: number, y: number) => (x === y ? x : x + (y - x) * t);
+  return { flatDb: mix(a.flatDb, b.flatDb), bandDb: a.bandDb.map((g, k) => mix(g, b.bandDb[k]!)) };
 }
 
 /** Context time at which a graph started at `at` from `fromCount` has fallen silent. */
@@ -124,10 +134,9 @@ export function buildListenGraph(ctx: BaseAudioContext, schedule: ListenSchedule
   function buildPart(part: PartPlan) {
     const input = ctx.createGain();
     const { curve } = part;
-    let power: number[];
+    let source: SourceSpectrum;
     if (part.struck) {
-      const burst = burstMeanSquare(STRIKE_DECAY_S, countSeconds);
-      power = OCTAVE_BANDS.map(({ exactHz }) => burst * whiteNoiseBandPower(exactHz, sr));
+      source = { tones: [], noiseVariance: burstMeanSquare(STRIKE_DECAY_S, countSeconds) };
       const env = ctx.createGain();
       env.gain.value = 0;
       for (const n of part.notes) {
@@ -142,7 +151,7 @@ export function buildListenGraph(ctx: BaseAudioContext, schedule: ListenSchedule
       startAt(src, at, timeOf(schedule.counts) + 5 * STRIKE_DECAY_S);
     } else {
       const breath = curve.family === "woodwind" || curve.family === "brass";
-      power = chordBandPower(part.calibrationHz, breath ? BREATH_VARIANCE : 0, sr);
+      source = { tones: sawtoothTones(part.calibrationHz, sr), noiseVariance: breath ? BREATH_VARIANCE : 0 };
       const breathEnv = ctx.createGain();
       breathEnv.gain.value = 0;
       for (const n of part.notes) {
@@ -171,12 +180,18 @@ export function buildListenGraph(ctx: BaseAudioContext, schedule: ListenSchedule
         startAt(src, at, timeOf(schedule.counts) + RELEASE_S);
       }
     }
-    // The bank follows the part's band levels count by count (linear ramps between counts).
-    const bank = filterBank(ctx, input);
+    // The equaliser is fitted to the from-set's and the to-set's levels and moves between them count by count.
+    const eq = equaliser(ctx, input);
+    const points = sourcePoints(source, sr);
+    const fit = (c: number) => fitEqualiser(curve.bandsDb[c]!.map((l) => l + schedule.offsetDb), points, sr);
+    const startEq = fit(0);
+    const endEq = curve.bandsDb[0]!.every((l, k) => l === curve.bandsDb[schedule.counts]![k]) ? startEq : fit(schedule.counts);
     const first = Math.max(0, Math.floor(fromCount));
     for (let c = first; c <= schedule.counts; c++) {
-      const g = bandGains(curve.bandsDb[c]!.map((l) => l + schedule.offsetDb), power);
-      bank.gains.forEach((node, b) => (c === first ? node.gain.setValueAtTime(g[b]!, at) : node.gain.linearRampToValueAtTime(g[b]!, timeOf(c))));
+      const e = between(startEq, endEq, c / schedule.counts);
+      const set = (param: AudioParam, v: number) => (c === first ? param.setValueAtTime(v, at) : param.linearRampToValueAtTime(v, timeOf(c)));
+      set(eq.flat.gain, amplitude(e.flatDb));
+      eq.bands.forEach((f, b) => set(f.gain, e.bandDb[b]!));
     }
     const delay = ctx.createDelay(MAX_DELAY_S);
     for (let c = first; c <= schedule.counts; c++) {
@@ -186,22 +201,20 @@ export function buildListenGraph(ctx: BaseAudioContext, schedule: ListenSchedule
     }
     const plan = ctx.createGain();
     const mute = ctx.createGain();
-    bank.sum.connect(delay).connect(plan).connect(mute).connect(mixBus);
+    eq.out.connect(delay).connect(plan).connect(mute).connect(mixBus);
     return { part, plan, mute };
   }
 
   // The background: noise shaped to the point's octave levels, at its level under the band.
   const bgGain = ctx.createGain();
   if (schedule.backgroundOctaveDb) {
-    const bank = filterBank(ctx, (() => {
-      const src = looped();
-      startAt(src, at, endTime);
-      return src;
-    })());
-    const power = OCTAVE_BANDS.map(({ exactHz }) => whiteNoiseBandPower(exactHz, sr));
-    const g = bandGains(schedule.backgroundOctaveDb.map((l) => l + schedule.offsetDb), power);
-    bank.gains.forEach((node, b) => node.gain.setValueAtTime(g[b]!, at));
-    bank.sum.connect(bgGain).connect(mixBus);
+    const src = looped();
+    startAt(src, at, endTime);
+    const bg = equaliser(ctx, src);
+    const e = fitEqualiser(schedule.backgroundOctaveDb.map((l) => l + schedule.offsetDb), sourcePoints({ tones: [], noiseVariance: 1 }, sr), sr);
+    bg.flat.gain.setValueAtTime(amplitude(e.flatDb), at);
+    bg.bands.forEach((f, b) => f.gain.setValueAtTime(e.bandDb[b]!, at));
+    bg.out.connect(bgGain).connect(mixBus);
   }
 
   /** The plan's gain from `when` on: its change count by count with the plan, none as written. */

@@ -6,10 +6,11 @@ import { mkdirSync } from "node:fs";
 import path from "node:path";
 import FFT from "fft.js";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { CEILING } from "@/components/listen/listen-graph";
 import type { OfflineRequest } from "@/components/listen/offline-render";
 import { NO_SOLO_MUTE } from "@/lib/listen/audible";
 import type { ListenAnswer, ListenPart } from "@/lib/listen/types";
-import { DEMO, demoIds } from "../support/api";
+import { APP_URL, DEMO, demoIds } from "../support/api";
 import { launchBrowser, signIn, type BrowserSession } from "../support/browser";
 import { openSet } from "./editor-support";
 
@@ -109,6 +110,29 @@ describe("listen: the graph rendered offline", () => {
   }, 120_000);
 });
 
+describe("listen: the sound follows the levels, and is never loud", () => {
+  it("a part's rendered octave levels follow its predicted band levels (relative to 1 kHz) within 0.5 dB in the bands its tones reach", async () => {
+    const x = await render({ input: input([MELODY]) });
+    const e = octaveEnergies(x, 0.4);
+    const deviations = [3, 4, 5, 6, 7].map((k) => db(e[k]! / e[4]!) - (MELODY.bandsDb[k]! - MELODY.bandsDb[4]!));
+    for (const d of deviations) expect(Math.abs(d)).toBeLessThan(0.5);
+  }, 120_000);
+
+  it("a loud set plays at the same level as a quiet one, and nothing passes the hard ceiling, even with the plan 30 dB up and a 120 dB background", async () => {
+    const rms = async (shift: number) => meanSquare(await render({ input: input([{ ...MELODY, bandsDb: MELODY.bandsDb.map((l) => l + shift) }, BASS]) }), 0.4, 1.8);
+    // Both parts moved alike keep the mix's balance: only the predicted SPL differs.
+    const quiet = await render({ input: input([MELODY, BASS]) });
+    const loud = await render({ input: input([{ ...MELODY, bandsDb: MELODY.bandsDb.map((l) => l + 40) }, { ...BASS, bandsDb: BASS.bandsDb.map((l) => l + 40) }]) });
+    expect(Math.abs(db(meanSquare(loud, 0.4, 1.8) / meanSquare(quiet, 0.4, 1.8)))).toBeLessThan(0.1);
+    expect(await rms(0)).toBeGreaterThan(0);
+    const extreme: OfflineRequest["input"] = { ...input([{ ...MELODY, planChangeDb: 30 }, { ...BASS, planChangeDb: 30 }]), to: { ...answer([{ ...MELODY, planChangeDb: 30 }, { ...BASS, planChangeDb: 30 }]), backgroundOctaveDb: new Array(8).fill(120) } };
+    const y = await render({ input: extreme, ab: "plan", background: true });
+    const peak = y.reduce((m, v) => Math.max(m, Math.abs(v)), 0);
+    expect(peak).toBeGreaterThan(0.1);
+    expect(peak).toBeLessThanOrEqual(CEILING + 1e-6);
+  }, 120_000);
+});
+
 describe("listen: the score's notes", () => {
   it("a section sounds where the score gives it notes and is silent where it rests, at the score's tempo", async () => {
     // 60 counts a minute: count c starts at c seconds. The trumpets rest until count 2 of the span, play to count 4, then rest.
@@ -142,6 +166,22 @@ describe("listen: a director listens in the field editor", () => {
     await page.getByTestId("listen-ab-plan").click();
     expect(await page.getByTestId("listen-ab-plan").getAttribute("aria-pressed")).toBe("true");
     await page.screenshot({ path: path.join(SHOTS, "listen-solo-plan.png") });
+    await page.getByTestId("listen-toggle").click();
+    await expect.poll(() => page.getByTestId("listen-toggle").textContent()).toBe("Listen");
+    expect(await listen.getByRole("alert").count()).toBe(0);
+    expect(problems.slice(before)).toEqual([]);
+  }, 180_000);
+
+  it("on the music page, Listen plays the transition into the phrase's first set and stops", async () => {
+    const { page, problems } = session;
+    const before = problems.length;
+    await page.goto(`${APP_URL}/shows/${ids.showId}/music`);
+    const listen = page.getByTestId("listen");
+    await listen.waitFor({ timeout: 60_000 });
+    await page.getByTestId("listen-toggle").click();
+    await expect.poll(() => page.getByTestId("listen-toggle").textContent(), { timeout: 30_000 }).toBe("Stop");
+    await listen.scrollIntoViewIfNeeded();
+    await page.screenshot({ path: path.join(SHOTS, "listen-music-page.png") });
     await page.getByTestId("listen-toggle").click();
     await expect.poll(() => page.getByTestId("listen-toggle").textContent()).toBe("Listen");
     expect(await listen.getByRole("alert").count()).toBe(0);
