@@ -1,10 +1,8 @@
 // Listen: the graph the control plays, rendered offline in Chromium (OfflineAudioContext through the page's own
 // code, window.__farfieldListen), and a director's walk through the control in the field editor.
-// Band energies are measured here with an FFT (fft.js 4.0.4) summed over the octave bands' edges fm·2^(±1/2)
-// of IEC 61260-1:2014 (base-2 octave edges; the exact base-10 ones differ by under 0.1 %).
+// Band energies are measured in Node (tests/support/octave-energies.ts: an FFT summed between IEC 61260-1 octave edges).
 import { mkdirSync } from "node:fs";
 import path from "node:path";
-import FFT from "fft.js";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { CEILING } from "@/components/listen/listen-graph";
 import type { OfflineRequest } from "@/components/listen/offline-render";
@@ -12,11 +10,11 @@ import { NO_SOLO_MUTE } from "@/lib/listen/audible";
 import type { ListenAnswer, ListenPart } from "@/lib/listen/types";
 import { APP_URL, DEMO, demoIds } from "../support/api";
 import { launchBrowser, signIn, type BrowserSession } from "../support/browser";
+import { octaveEnergies } from "../support/octave-energies";
 import { openSet } from "./editor-support";
 
 const SHOTS = path.resolve(__dirname, "../../.tmp/shots");
 const SR = 48_000;
-const CENTRES = [63, 125, 250, 500, 1000, 2000, 4000, 8000].map((_, k) => 1000 * 2 ** (k - 4));
 let ids: Awaited<ReturnType<typeof demoIds>>;
 let session: BrowserSession;
 
@@ -49,21 +47,8 @@ async function render(req: Partial<OfflineRequest> & { input: OfflineRequest["in
   return Float64Array.from(await session.page.evaluate((r) => window.__farfieldListen!.render(r), full));
 }
 
-/** Energy in each octave band of a Hann-windowed 65 536-sample stretch from `fromS` seconds. */
-function octaveEnergies(x: Float64Array, fromS: number): number[] {
-  const n = 65_536;
-  const start = Math.round(fromS * SR);
-  const frame = new Array<number>(n);
-  for (let i = 0; i < n; i++) frame[i] = (x[start + i] ?? 0) * (0.5 - 0.5 * Math.cos((2 * Math.PI * i) / (n - 1)));
-  const fft = new FFT(n);
-  const out = fft.createComplexArray();
-  fft.realTransform(out, frame);
-  return CENTRES.map((fc) => {
-    let e = 0;
-    for (let k = Math.ceil((fc / Math.SQRT2) * (n / SR)); k < Math.min(n / 2, (fc * Math.SQRT2 * n) / SR); k++) e += out[2 * k]! ** 2 + out[2 * k + 1]! ** 2;
-    return e;
-  });
-}
+/** Octave energies of 65 536 samples from `fromS` seconds. */
+const octaves = (x: Float64Array, fromS: number) => octaveEnergies(x, Math.round(fromS * SR), SR);
 const meanSquare = (x: Float64Array, fromS: number, toS: number) => {
   let s = 0;
   const a = Math.round(fromS * SR), b = Math.round(toS * SR);
@@ -85,8 +70,8 @@ describe("listen: the graph rendered offline", () => {
 
   it("muting the melody lowers the rendered energy in its octave bands (1–4 kHz) and leaves the bass's (63–125 Hz)", async () => {
     const both = input([MELODY, BASS]);
-    const all = octaveEnergies(await render({ input: both }), 0.4);
-    const muted = octaveEnergies(await render({ input: both, soloMute: { ...NO_SOLO_MUTE, mutedVoices: ["melody"] } }), 0.4);
+    const all = octaves(await render({ input: both }), 0.4);
+    const muted = octaves(await render({ input: both, soloMute: { ...NO_SOLO_MUTE, mutedVoices: ["melody"] } }), 0.4);
     // The melody is 20–38 dB above the bass in 1–4 kHz: muting it takes nearly all of those bands away.
     for (const k of [4, 5, 6]) expect(db(muted[k]! / all[k]!)).toBeLessThan(-10);
     for (const k of [0, 1]) expect(Math.abs(db(muted[k]! / all[k]!))).toBeLessThan(1);
@@ -113,7 +98,7 @@ describe("listen: the graph rendered offline", () => {
 describe("listen: the sound follows the levels, and is never loud", () => {
   it("a part's rendered octave levels follow its predicted band levels (relative to 1 kHz) within 0.5 dB in the bands its tones reach", async () => {
     const x = await render({ input: input([MELODY]) });
-    const e = octaveEnergies(x, 0.4);
+    const e = octaves(x, 0.4);
     const deviations = [3, 4, 5, 6, 7].map((k) => db(e[k]! / e[4]!) - (MELODY.bandsDb[k]! - MELODY.bandsDb[4]!));
     for (const d of deviations) expect(Math.abs(d)).toBeLessThan(0.5);
   }, 120_000);

@@ -1,11 +1,10 @@
-import FFT from "fft.js";
 import { describe, expect, it } from "vitest";
 import { equalisedLevels, fitEqualiser, sawtoothTones, sourcePoints } from "@/lib/listen/equaliser";
 import { burstMeanSquare, OCTAVE_Q } from "@/lib/listen/source-power";
+import { OCTAVE_CENTRES as CENTRES, octaveEnergies } from "../../support/octave-energies";
 
 const SR = 48_000;
 const db = (x: number) => 10 * Math.log10(x);
-const CENTRES = [0, 1, 2, 3, 4, 5, 6, 7].map((k) => 1000 * 10 ** ((3 * (k - 4)) / 10));
 
 /** Peaking biquad of the Audio EQ Cookbook (R. Bristow-Johnson), "peakingEQ", run on samples. */
 function cookbookPeaking(x: Float64Array, fc: number, q: number, gainDb: number): Float64Array {
@@ -21,20 +20,6 @@ function cookbookPeaking(x: Float64Array, fc: number, q: number, gainDb: number)
     x2 = x1; x1 = x[i]!; y2 = y1; y1 = v; y[i] = v;
   }
   return y;
-}
-
-/** Octave energies (edges fm·2^(∓1/2)) of 65 536 samples from `start`, by FFT (fft.js 4.0.4), Hann window. */
-function octaveEnergies(x: Float64Array, start: number): number[] {
-  const n = 65_536;
-  const frame = Array.from({ length: n }, (_, i) => x[start + i]! * (0.5 - 0.5 * Math.cos((2 * Math.PI * i) / (n - 1))));
-  const fft = new FFT(n);
-  const out = fft.createComplexArray();
-  fft.realTransform(out, frame);
-  return CENTRES.map((fm) => {
-    let e = 0;
-    for (let k = Math.ceil((fm / Math.SQRT2) * (n / SR)); k < Math.min(n / 2, (fm * Math.SQRT2 * n) / SR); k++) e += out[2 * k]! ** 2 + out[2 * k + 1]! ** 2;
-    return e;
-  });
 }
 
 describe("listen: the octave equaliser", () => {
@@ -59,7 +44,7 @@ describe("listen: the octave equaliser", () => {
       x[i]! += ((seed / 4294967296) * 2 - 1) * Math.sqrt(3) * 0.1; // variance 0.01
     }
     CENTRES.forEach((fc, b) => (x = cookbookPeaking(x, fc, OCTAVE_Q, eq.bandDb[b]!)));
-    const measured = octaveEnergies(x, SR / 4);
+    const measured = octaveEnergies(x, SR / 4, SR);
     const predicted = equalisedLevels(points, eq, SR);
     for (const k of [3, 4, 5, 6, 7]) expect(Math.abs(db(measured[k]! / measured[4]!) - (predicted[k]! - predicted[4]!))).toBeLessThan(0.5);
   });
