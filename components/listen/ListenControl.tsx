@@ -171,6 +171,7 @@ export function ListenControl({ showId, listeningPointId, pointName, sets, index
         <strong>An audible sketch of the prediction, not a recording.</strong> Each section is a simple synthesized voice shaped to its predicted level in each octave band at {pointName}, arriving with its predicted delay
         {from ? "; between the two sets the levels move count by count in step with the field" : ""}.
         {loaded ? (loaded.score ? " Notes from the imported score." : " No score imported: each section holds a chord in its register.") : null}
+        {ab === "plan" ? ` “With the plan” changes each section by the balance plan of ${from ? "each of the two sets" : "the set"} at ${pointName}.` : null}
       </p>
       <p className="text-ink-soft" data-testid="listen-caution">
         Keep your volume low, above all on headphones: playback is held to one quiet level and limited, but your device&apos;s volume decides how loud it is. Follow your school&apos;s or venue&apos;s rules; any decision about a
