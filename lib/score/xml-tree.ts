@@ -43,7 +43,14 @@ function toElement(raw: Raw): XmlElement | null {
 export function parseXml(text: string): XmlElement {
   const valid = XMLValidator.validate(text);
   if (valid !== true) throw new ScoreError(`The file is not well-formed XML (line ${valid.err.line}: ${valid.err.msg}).`);
-  const roots = (parser.parse(text) as Raw[]).map(toElement).filter((e): e is XmlElement => e !== null);
+  let parsed: Raw[];
+  try {
+    parsed = parser.parse(text) as Raw[];
+  } catch (err) {
+    // The parser's own limits (entity expansion and the like) refuse a file rather than fail the request.
+    throw new ScoreError(`The file could not be read as XML (${err instanceof Error ? err.message : "unreadable"}).`);
+  }
+  const roots = parsed.map(toElement).filter((e): e is XmlElement => e !== null);
   if (!roots[0]) throw new ScoreError("The file holds no XML element.");
   return roots[0];
 }

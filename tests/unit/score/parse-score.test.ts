@@ -100,6 +100,13 @@ describe("what the file is", () => {
     expect(() => parse("<html><body/></html>")).toThrow(/not a MusicXML score/);
   });
 
+  it("does not expand entities a file defines for itself (nested <!ENTITY> of a billion-laughs file)", () => {
+    const defs = ["a", "b", "c", "d", "e", "f"].map((n, i, all) => `<!ENTITY ${n} "${i === 0 ? "aaaaaaaaaa" : `&${all[i - 1]};`.repeat(10)}">`).join("");
+    const xml = `<?xml version="1.0"?><!DOCTYPE score-partwise [${defs}]><score-partwise><part-list><score-part id="P1"><part-name>&f;&f;</part-name></score-part></part-list><part id="P1"><measure number="1">${attrs(1, 4, 4)}${rest(4)}</measure></part></score-partwise>`;
+    const name = parse(xml).parts[0]!.name;
+    expect(name.length).toBeLessThan(100);
+  });
+
   it("reads a compressed .mxl through META-INF/container.xml's rootfile (MusicXML 4.0 container.xml, <rootfile full-path>)", () => {
     const xml = partwise([{ id: "P1", name: "Alto", measures: [attrs(1, 4, 4) + note("A4", 4)] }]);
     const container = '<?xml version="1.0"?><container><rootfiles><rootfile full-path="score/piece.musicxml" media-type="application/vnd.recordare.musicxml+xml"/></rootfiles></container>';
