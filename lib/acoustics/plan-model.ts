@@ -1,13 +1,16 @@
 // The balance plan as numbers: sections that may change (units), the groups whose levels the
 // targets compare (voices, registers of a choir, sections within a voice), the targets as hinge
 // residuals in dB, and the musical limits (each unit's step range, the written shape). A group's level
-// is its loudness level (phon, ISO 532-1, as the balance checks measure it) as written, moved by the
-// change of its A-weighted energy at the point when its sections play other dynamics: exact as
-// written, and monotone in every section's step, which the branch and bound needs.
+// is its loudness level (phon, ISO 532-1, as the balance checks measure it) at the change of its
+// A-weighted energy at the point when its sections play other dynamics: the group's written spectrum
+// moved by that change, looked up on a curve computed once per group. Exact as written, and monotone
+// in every section's step, which the branch and bound needs. Loudness level does not follow dB one
+// for one: a soft, masked-sounding group gains far more than a phon per dB as it comes up, so a plan
+// that moved levels one for one overshot (a soft melody raised four steps where three would lead).
 import { OCTAVE_BANDS, BAND_COUNT } from "./bands";
 import { catalogOf, groupBy, soundingPlayers, type BoxPlayer } from "./box-players";
 import { BATTERY_FAMILIES, PYRAMID_FAMILIES, REGISTERS_LOW_TO_HIGH, WIND_FAMILIES } from "./checks";
-import { groupLoudness } from "./group-loudness";
+import { octaveLoudness } from "./group-loudness";
 import { instrumentBandsInto } from "./instrument";
 import type { MusicalLimits } from "./plan-limits";
 import type { BalanceTargets } from "./targets";
@@ -89,8 +92,10 @@ export interface PlanModel {
   heldEnergy: Float64Array;
   groupUnits: Int32Array[];
   stepEnergy: Float64Array[][];
-  /** Per group, its loudness level as written (phon) less its A-weighted energy level as written (dB). */
-  offsetDb: Float64Array;
+  /** Per group, its A-weighted energy level as written (dB): where its loudness curve is read from. */
+  writtenDb: Float64Array;
+  /** Per group, its loudness level (phon) against its change of energy from as written. */
+  loudness: LoudnessCurve[];
   residuals: Residual[];
   shape: ShapePair[];
 }
@@ -311,12 +316,68 @@ export function buildPlanModel(
     residuals,
     shape: limits.keepShape ? shapePairs(units) : [],
   };
-  // Each group's loudness level as written, against its A-weighted level as written.
-  const offsetDb = Float64Array.from(groups, (members) => {
-    const written = members.reduce((e, p) => e + playerEnergy[p]![playerBase[p]!]!, 0);
-    return groupLoudness(members.map((p) => ({ bandsDb: playerBands[p]! }))).phon - 10 * Math.log10(written);
-  });
-  return { ...model, ...stepTables(model), offsetDb };
+  const tables = stepTables(model);
+  const writtenDb = Float64Array.from(groups, (members) => 10 * Math.log10(members.reduce((e, p) => e + playerEnergy[p]![playerBase[p]!]!, 0)));
+  const loudness = groups.map((members, g) => new LoudnessCurve(members.map((p) => playerBands[p]!), energyRangeDb(tables, g, writtenDb[g]!)));
+  return { ...model, ...tables, writtenDb, loudness };
+}
+
+/** The loudness curves' grid step (dB); between grid points the curve is read linearly. */
+const CURVE_STEP_DB = 1;
+
+/** How far (dB, below and above its written level) group g's energy can move over every unit's range. */
+function energyRangeDb(t: Pick<PlanModel, "heldEnergy" | "stepEnergy">, g: number, writtenDb: number): [number, number] {
+  let lo = t.heldEnergy[g]!;
+  let hi = lo;
+  for (const table of t.stepEnergy[g]!) {
+    lo += Math.min(...table);
+    hi += Math.max(...table);
+  }
+  return [10 * Math.log10(lo) - writtenDb, 10 * Math.log10(hi) - writtenDb];
+}
+
+/**
+ * A group's loudness curve over [from, to] dB of change (rounded outwards to the grid): the loudness
+ * level of its summed written octave levels moved as a whole, computed at a grid point the first time
+ * it is read (a search reads few of them). ISO 532-1 loudness never falls as every band rises, so the
+ * curve is non-decreasing, which the search's bound relies on.
+ */
+const shifted = new Float64Array(BANDS); // scratch: a curve's spectrum moved to one grid point
+
+class LoudnessCurve {
+  private readonly sumDb = new Float64Array(BANDS);
+  private readonly phon: Float64Array;
+  private readonly fromDb: number;
+  constructor(members: readonly ArrayLike<number>[], [from, to]: [number, number]) {
+    for (const bandsDb of members) for (let b = 0; b < BANDS; b++) this.sumDb[b]! += 10 ** (bandsDb[b]! / 10);
+    for (let b = 0; b < BANDS; b++) this.sumDb[b] = 10 * Math.log10(this.sumDb[b]!);
+    const start = Math.floor(from / CURVE_STEP_DB);
+    this.fromDb = start * CURVE_STEP_DB;
+    this.phon = new Float64Array(Math.ceil(to / CURVE_STEP_DB) - start + 1).fill(NaN);
+  }
+  private at(i: number): number {
+    let v = this.phon[i]!;
+    if (Number.isNaN(v)) {
+      const d = this.fromDb + i * CURVE_STEP_DB;
+      for (let b = 0; b < BANDS; b++) shifted[b] = this.sumDb[b]! + d;
+      v = this.phon[i] = octaveLoudness(shifted).phon;
+    }
+    return v;
+  }
+  /** Loudness level (phon) at a change of `db` from as written, read linearly between grid points, held at the ends. */
+  read(db: number): number {
+    const last = this.phon.length - 1;
+    const x = (db - this.fromDb) / CURVE_STEP_DB;
+    if (!(x > 0)) return this.at(0);
+    if (x >= last) return this.at(last);
+    const i = Math.floor(x);
+    const lo = this.at(i);
+    return lo + (this.at(i + 1) - lo) * (x - i);
+  }
+}
+/** Loudness level (phon) of group g at energy e (A-weighted, at the point). */
+export function levelOfEnergy(m: Pick<PlanModel, "writtenDb" | "loudness">, g: number, e: number): number {
+  return m.loudness[g]!.read(10 * Math.log10(e) - m.writtenDb[g]!);
 }
 
 /** Step tables of the groups (see PlanModel). */
@@ -358,7 +419,7 @@ function groupLevel(m: PlanModel, g: number, k: ArrayLike<number>, share?: Float
     e += ej;
   }
   if (share) for (let j = 0; j < share.length; j++) share[j]! /= e;
-  return 10 * Math.log10(e) + m.offsetDb[g]!;
+  return levelOfEnergy(m, g, e);
 }
 
 /** Group levels at whole steps k per unit (exact); with `share`, each playing unit's share of its groups' energy. */

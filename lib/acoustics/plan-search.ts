@@ -5,11 +5,12 @@
 // the musical limits (a step range, or the melody under its accompaniment).
 //
 // Branch and bound (Land and Doig, 1960): sections are fixed one at a time, depth first. Every group level
-// rises or falls with each section's step only through that section's energy in it, so with the free
+// rises or falls with each section's step only through that section's energy in it (and never falls as
+// that energy rises), so with the free
 // sections anywhere in their ranges a group's level lies between the sum of their smallest and of their
 // largest energies; each target's residual is then at least its value at the end of those intervals that
 // favours it. The bound is valid, so the search returns the exact optimum unless it stops at the node cap.
-import { levelsAtSteps, targetCost, type PlanModel, type ShapePair } from "./plan-model";
+import { levelOfEnergy, levelsAtSteps, targetCost, type PlanModel, type ShapePair } from "./plan-model";
 
 /** Weight of a dB of change against a dB of target missed: 0.01, so the targets come first and closeness to what is written decides between plans that meet them equally. */
 export const CHANGE_WEIGHT = 0.01;
@@ -114,8 +115,8 @@ export function searchPlan(m: PlanModel, change: readonly number[][], nodeLimit 
         eHi += tableMax[g]![j]!;
       }
     }
-    lo[g] = 10 * Math.log10(eLo) + m.offsetDb[g]!;
-    hi[g] = 10 * Math.log10(eHi) + m.offsetDb[g]!;
+    lo[g] = levelOfEnergy(m, g, eLo);
+    hi[g] = levelOfEnergy(m, g, eHi);
   };
   for (let g = 0; g < G; g++) groupBounds(g);
   const resBound = new Float64Array(m.residuals.length);

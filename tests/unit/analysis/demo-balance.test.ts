@@ -4,7 +4,7 @@
 import { describe, expect, it } from "vitest";
 import { demoSetInputs } from "@/db/demo/analysis-inputs";
 import { HARBOR_RIDGE } from "@/db/demo/harbor-ridge";
-import { analyzeSet, checkBalance, DYNAMICS, resolveLimits, solveBalancePlan, type CheckResult } from "@/lib/acoustics";
+import { analyzeSet, applyPlan, checkBalance, DYNAMICS, resolveLimits, solveBalancePlan, type CheckResult } from "@/lib/acoustics";
 import { CHECK_IDS } from "@/lib/acoustics/types";
 
 const show = HARBOR_RIDGE.shows[0]!;
@@ -49,6 +49,17 @@ describe("the demo show at the press box, as written", () => {
     for (const r of results) {
       if (["7", "7A", "8", "10"].includes(r.number)) continue;
       expect([r.number, r.checks.find((c) => c.id === "heard-at-box")!.detail]).not.toEqual([r.number, expect.stringMatching(/the melody/)]);
+    }
+  });
+
+  it("the clarinets' song's plan brings the melody forward in 7, 7A and 8, and says no target is left unmet", () => {
+    const phrase = show.phrases.find((p) => p.name === "Clarinet song")!;
+    const inPhrase = sets.filter((s) => s.phrase === phrase.name);
+    const plan = solveBalancePlan(inPhrase.map((s) => s.input), "Press box", null, inPhrase.map((s) => s.number), phrase.planLimits);
+    expect(plan.unmet).toEqual([]);
+    for (const s of inPhrase) {
+      const played = applyPlan(s.input, plan.entries);
+      expect([s.number, checkBalance(played, analyzeSet(played).points[0]!).find((c) => c.id === "melody-forward")!.passed]).toEqual([s.number, true]);
     }
   });
 
