@@ -47,6 +47,8 @@ test("the director signs in, opens Harbor Ridge and sees the show overview", asy
   await expect.poll(() => page.getByRole("heading", { level: 1, name: "Lanterns on the Water" }).isVisible(), { timeout: 20_000 }).toBe(true);
   const sets = page.getByRole("list", { name: "Sets in order" }).getByRole("link");
   expect(await sets.count()).toBeGreaterThanOrEqual(12);
+  // The sets read under the show's movements.
+  expect(await page.getByTestId("movement-heading").allTextContents()).toEqual(["Harbor Lights", "Still Water", "Lantern Procession"]);
   const roster = page.getByRole("table", { name: /Roster/ });
   await expect.poll(() => roster.isVisible()).toBe(true);
   expect(await roster.locator("tbody tr").count()).toBeGreaterThanOrEqual(60);

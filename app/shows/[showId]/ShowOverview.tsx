@@ -55,7 +55,7 @@ export function ShowOverview({ showId }: { showId: string }) {
       </PageTitle>
       <div className="space-y-6">
         <Card title="Sets" titleId="sets-title">
-          <SetsStrip showId={s.id} sets={sets} />
+          <SetsStrip showId={s.id} sets={sets} movements={show.data.movements} />
         </Card>
         <div className="grid items-start gap-6 md:grid-cols-2">
           <Card title="Listening points" titleId="points-title">
