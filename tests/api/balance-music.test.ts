@@ -47,6 +47,14 @@ describe("bulk changes", () => {
     expect(restored.find((r: any) => r.section === a.section).writtenDynamic).toBe(a.writtenDynamic);
   });
 
+  it("lists the sections in score order: woodwinds, brass, battery, front ensemble", async () => {
+    const names = (await designer.get(musicPath())).body.sections.map((s: any) => s.name);
+    expect(names.slice(0, 2)).toEqual(["Flutes", "Clarinets"]);
+    expect(names.indexOf("Bari Sax")).toBeLessThan(names.indexOf("Trumpets"));
+    expect(names.indexOf("Tubas")).toBeLessThan(names.indexOf("Snares"));
+    expect(names.at(-1)).toBe("Front Ensemble");
+  });
+
   it("refuses staff (403), a dynamic that does not exist (400) and a phrase of another show (400)", async () => {
     const m = (await designer.get(musicPath())).body;
     const row = { phraseId: m.phrases[0].id, section: m.sections[0].name };

@@ -4,13 +4,14 @@ import { listPerformers, listSets } from "@/db/queries/shows";
 import { requireShow } from "@/lib/auth/access";
 import { can } from "@/lib/auth/permissions";
 import { route } from "@/lib/http/handler";
+import { sectionsInScoreOrder } from "@/lib/show/score-order";
 
 /** The show's music: phrases over the sets, each section's voice and dynamics per phrase, and overrides. */
 export const GET = route<{ showId: string }>(async (_req, { showId }) => {
   const { role } = await requireShow(showId, "read");
   const [music, roster, sets] = await Promise.all([loadMusic(showId), listPerformers(showId), listSets(showId)]);
   const numberOf = new Map(sets.map((s) => [s.id, s.number]));
-  const sections = [...new Set(roster.map((p) => p.section))].map((name) => ({ name, players: roster.filter((p) => p.section === name).length }));
+  const sections = sectionsInScoreOrder(roster);
   return NextResponse.json({
     phrases: music.phrases.map((p) => ({
       id: p.id,
