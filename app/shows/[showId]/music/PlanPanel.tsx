@@ -7,6 +7,7 @@ import { Button } from "@/components/Button";
 import { Card } from "@/components/Card";
 import { sendJson } from "@/components/fetcher";
 import { useApi } from "@/components/use-api";
+import { checksLeftByPlan } from "@/lib/music/plan-scope";
 import { LimitsForm } from "./LimitsForm";
 import type { MusicPhrase, PhrasePlanResponse } from "./music-types";
 import { CHECK_LABELS, formatDb, formatSone } from "./voices";
@@ -85,6 +86,7 @@ export function PlanPanel({ showId, phrase, canAdopt, listeningPoints }: { showI
               <ul className="list-disc pl-5">{plan.data.unmet.map((u) => <li key={u.detail}>{u.detail}</li>)}</ul>
             </div>
           ) : null}
+          <LeftByPlan sets={plan.data.sets} />
           <h3 className="mt-4 font-semibold">Melody forward, set by set</h3>
           <ul className="mt-1 space-y-1">
             {plan.data.sets.map((s) => {
@@ -111,6 +113,24 @@ export function PlanPanel({ showId, phrase, canAdopt, listeningPoints }: { showI
         </>
       )}
     </Card>
+  );
+}
+
+/** Checks that still fail with the plan and that no section's dynamic aims at: where to look instead. */
+function LeftByPlan({ sets }: { sets: PhrasePlanResponse["sets"] }) {
+  const left = checksLeftByPlan(sets);
+  if (!left.length) return null;
+  return (
+    <div className="mt-3 rounded-lg border border-ink/15 bg-paper-sunk p-3 text-sm" data-testid="left-by-plan">
+      <p className="font-semibold">Still failing with the plan, and not a matter of section dynamics</p>
+      <ul className="list-disc pl-5">
+        {left.map((l) => (
+          <li key={l.id}>
+            {l.label} ({l.sets.length === 1 ? "set" : "sets"} {l.sets.join(", ")}): {l.where}.
+          </li>
+        ))}
+      </ul>
+    </div>
   );
 }
 
