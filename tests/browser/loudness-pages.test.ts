@@ -78,4 +78,17 @@ describe("loudness on the balance pages", () => {
     await heading.screenshot({ path: path.join(SHOTS, "music-melody-loudness.png") }).catch(() => undefined);
     expect(problems).toEqual([]);
   });
+
+  it("the music page's plan names what still fails with it and is not a matter of section dynamics", async () => {
+    const { page, problems } = session;
+    const music = await ids.director.get(`/api/shows/${ids.showId}/music`);
+    const phraseId = music.body.phrases.find((p: any) => p.name === "Procession").id;
+    await page.goto(`${APP_URL}/shows/${ids.showId}/music?phrase=${phraseId}`);
+    const left = page.getByTestId("left-by-plan");
+    await left.waitFor({ timeout: 60_000 });
+    // The demo's back ranks turned upstage in set 13 (README, "The demo show").
+    expect(await left.textContent()).toMatch(/Depth support \(set 13\): the back of the form/);
+    expect(await left.textContent()).not.toMatch(/depth-support|stand-outs/);
+    expect(problems).toEqual([]);
+  });
 });
