@@ -322,8 +322,8 @@ export function buildPlanModel(
   return { ...model, ...tables, writtenDb, loudness };
 }
 
-/** The loudness curves' grid step (dB); between grid points the curve is read linearly. */
-const CURVE_STEP_DB = 1;
+/** The loudness curves' grid step (dB); between grid points the curve is read linearly (2 dB: as close to a full evaluation as 1 dB in plan-loudness.test.ts, at about two thirds of the time for a 300-player phrase). */
+const CURVE_STEP_DB = 2;
 
 /** How far (dB, below and above its written level) group g's energy can move over every unit's range. */
 function energyRangeDb(t: Pick<PlanModel, "heldEnergy" | "stepEnergy">, g: number, writtenDb: number): [number, number] {
