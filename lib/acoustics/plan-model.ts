@@ -6,7 +6,7 @@
 // moved by that change, looked up on a curve computed once per group. Exact as written, and monotone
 // in every section's step, which the branch and bound needs. Loudness level does not follow dB one
 // for one: a soft, masked-sounding group gains far more than a phon per dB as it comes up, so a plan
-// that moved levels one for one overshot (a soft melody raised four steps where three would lead).
+// that moved levels one for one overshot (the brass under a soft clarinet melody taken to pp where one step down would do).
 import { OCTAVE_BANDS, BAND_COUNT } from "./bands";
 import { catalogOf, groupBy, soundingPlayers, type BoxPlayer } from "./box-players";
 import { BATTERY_FAMILIES, PYRAMID_FAMILIES, REGISTERS_LOW_TO_HIGH, WIND_FAMILIES } from "./checks";
@@ -336,14 +336,14 @@ function energyRangeDb(t: Pick<PlanModel, "heldEnergy" | "stepEnergy">, g: numbe
   return [10 * Math.log10(lo) - writtenDb, 10 * Math.log10(hi) - writtenDb];
 }
 
-/**
- * A group's loudness curve over [from, to] dB of change (rounded outwards to the grid): the loudness
- * level of its summed written octave levels moved as a whole, computed at a grid point the first time
- * it is read (a search reads few of them). ISO 532-1 loudness never falls as every band rises, so the
- * curve is non-decreasing, which the search's bound relies on.
- */
 const shifted = new Float64Array(BANDS); // scratch: a curve's spectrum moved to one grid point
 
+/**
+ * A group's loudness curve over [from, to] dB of change (rounded outwards to the grid): the loudness
+ * level of its summed written octave levels moved as a whole, each grid point computed the first time
+ * it is read. ISO 532-1 loudness never falls as every band rises (plan-loudness.test.ts), so the curve
+ * is non-decreasing, which the search's bound relies on.
+ */
 class LoudnessCurve {
   private readonly sumDb = new Float64Array(BANDS);
   private readonly phon: Float64Array;
@@ -375,6 +375,7 @@ class LoudnessCurve {
     return lo + (this.at(i + 1) - lo) * (x - i);
   }
 }
+
 /** Loudness level (phon) of group g at energy e (A-weighted, at the point). */
 export function levelOfEnergy(m: Pick<PlanModel, "writtenDb" | "loudness">, g: number, e: number): number {
   return m.loudness[g]!.read(10 * Math.log10(e) - m.writtenDb[g]!);
