@@ -28,6 +28,7 @@ export { hearingMap, EAR_HEIGHT_M, HEARING_MIN_DISTANCE_M, type HearingOptions, 
 export { checkBalance } from "./checks";
 export { planBalance, solveBalancePlan, planCost, applyPlan, type PlanEntryDetail, type BalancePlan, type UnmetTarget, type PlanInput, type PlanCostEntry } from "./plan";
 export { DEFAULT_LIMITS, LIMIT_STEPS_RANGE, resolveLimits, type MusicalLimits } from "./plan-limits";
+export { PLANNED_CHECKS } from "./planned-checks";
 export { DEFAULT_TARGETS, resolveTargets, TARGET_RANGES, type BalanceTargets } from "./targets";
 export { loudnessIso532_1, soneToPhon, phonToSone, type Loudness, type SoundField } from "./loudness";
 export { THIRD_OCTAVE_COUNT, THIRD_OCTAVE_NOMINAL_HZ } from "./loudness-tables";

@@ -13,6 +13,7 @@ import { BATTERY_FAMILIES, PYRAMID_FAMILIES, REGISTERS_LOW_TO_HIGH, WIND_FAMILIE
 import { octaveLoudness } from "./group-loudness";
 import { instrumentBandsInto } from "./instrument";
 import type { MusicalLimits } from "./plan-limits";
+import type { PLANNED_CHECKS } from "./planned-checks";
 import type { BalanceTargets } from "./targets";
 import { DYNAMICS, VOICES, type AnalysisInput, type CheckId, type Dynamic, type InstrumentSpec, type PointResult, type Voice } from "./types";
 import { aWeightingDb } from "./weighting";
@@ -198,7 +199,7 @@ export function buildPlanModel(
   /** The checks that fail as written: only their targets are planned for (all when omitted). */
   failing?: ReadonlySet<CheckId>,
 ): PlanModel {
-  const wants = (id: CheckId) => !failing || failing.has(id);
+  const wants = (id: (typeof PLANNED_CHECKS)[number]) => !failing || failing.has(id);
   const sets = inputs.map((input, n) => soundingPlayers(input, points[n]!));
   const units = findUnits(inputs, sets, limits, nothingToChange);
   const unitOf = new Map<string, number>();

@@ -5,11 +5,10 @@
 // the musical limits (a step range, or the melody under its accompaniment).
 //
 // Branch and bound (Land and Doig, 1960): sections are fixed one at a time, depth first. Every group level
-// rises or falls with each section's step only through that section's energy in it (and never falls as
-// that energy rises), so with the free
-// sections anywhere in their ranges a group's level lies between the sum of their smallest and of their
-// largest energies; each target's residual is then at least its value at the end of those intervals that
-// favours it. The bound is valid, so the search returns the exact optimum unless it stops at the node cap.
+// rises or falls with each section's step only through that section's energy in it, and never falls as
+// that energy rises, so with the free sections anywhere in their ranges a group's level lies between its
+// levels at the sum of their smallest and of their largest energies; each target's residual is then at
+// least its value at the end of those intervals that favours it. The bound is valid, so the search returns the exact optimum unless it stops at the node cap.
 import { levelOfEnergy, levelsAtSteps, targetCost, type PlanModel, type ShapePair } from "./plan-model";
 
 /** Weight of a dB of change against a dB of target missed: 0.01, so the targets come first and closeness to what is written decides between plans that meet them equally. */

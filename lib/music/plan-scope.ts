@@ -1,10 +1,8 @@
 // What the balance plan aims at, and what it leaves to the drill or to one player: a phrase can keep
 // failing a check that no section's dynamic fixes, and the plan must say so rather than stay silent. Pure.
+import { PLANNED_CHECKS } from "@/lib/acoustics/planned-checks";
 import type { CheckId } from "@/lib/acoustics/types";
 import { CHECK_LABELS } from "./check-labels";
-
-/** The checks whose targets the plan serves with section dynamics (lib/acoustics/plan-model.ts). */
-export const PLANNED_CHECKS: readonly CheckId[] = ["melody-forward", "bass-up-pyramid", "battery-balance"];
 
 /** Where to look instead, for a failing check the plan does not serve. */
 const ELSEWHERE: Partial<Record<CheckId, string>> = {
