@@ -10,7 +10,7 @@ import { analyzeSet, applyPlan, checkBalance, solveBalancePlan, type AnalysisInp
 import { soundingPlayers } from "@/lib/acoustics/box-players";
 import { groupLoudness, octaveLoudness } from "@/lib/acoustics/group-loudness";
 import { planProblem } from "@/lib/acoustics/plan";
-import { levelsAtSteps } from "@/lib/acoustics/plan-model";
+import { levelOfEnergy, levelsAtSteps } from "@/lib/acoustics/plan-model";
 import { DYNAMICS } from "@/lib/acoustics/types";
 import { AIR, BOX, facingToward, performer } from "./helpers";
 import { randomCase } from "./plan-cases";
@@ -47,6 +47,24 @@ describe("the balance plan's loudness levels", () => {
     expect(errors.length).toBeGreaterThan(300);
     expect(p95).toBeLessThan(1);
     expect(errors.at(-1)!).toBeLessThan(2.5);
+  });
+
+  it("hold at the ends of what the sections can play: a level read beyond them is the curve's first or last point", () => {
+    // The first seeded band with targets to plan for (a band that passes every check as written has none).
+    const m = Array.from({ length: 50 }, (_, seed) => randomCase(seed + 1))
+      .map(({ input, limits }) => planProblem([input], BOX.id, null, limits).model)
+      .find((model) => model.groups.length > 0)!;
+    expect(m.groups.length).toBeGreaterThan(0);
+    const steps = (pick: "kMin" | "kMax") => m.units.map((u) => u[pick]);
+    const softest = levelsAtSteps(m, steps("kMin"));
+    const loudest = levelsAtSteps(m, steps("kMax"));
+    m.groups.forEach((_, g) => {
+      const written = 10 ** (m.writtenDb[g]! / 10);
+      expect(levelOfEnergy(m, g, written * 1e-6)).toBeLessThanOrEqual(softest[g]! + 1e-9);
+      expect(Number.isFinite(levelOfEnergy(m, g, written * 1e-6))).toBe(true);
+      expect(levelOfEnergy(m, g, written * 1e6)).toBeGreaterThanOrEqual(loudest[g]! - 1e-9);
+      expect(Number.isFinite(levelOfEnergy(m, g, written * 1e6))).toBe(true);
+    });
   });
 
   it("bring a soft, far clarinet melody over a brass chorale as far as the target and no further", () => {
