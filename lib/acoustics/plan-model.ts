@@ -7,8 +7,10 @@
 // in every section's step, which the branch and bound needs. Loudness level does not follow dB one
 // for one: a soft, masked-sounding group gains far more than a phon per dB as it comes up, so a plan
 // that moved levels one for one overshot (the brass under a soft clarinet melody taken to pp where one step down would do).
+// The "heard" targets compare changes of energy instead (dB): a voice's margin over what masks it.
 import { OCTAVE_BANDS, BAND_COUNT } from "./bands";
 import { catalogOf, groupBy, soundingPlayers, type BoxPlayer } from "./box-players";
+import { backgroundThirdOctaves, thirdOctavesDbA } from "./background";
 import { BATTERY_FAMILIES, PYRAMID_FAMILIES, REGISTERS_LOW_TO_HIGH, WIND_FAMILIES } from "./checks";
 import { octaveLoudness } from "./group-loudness";
 import { instrumentBandsInto } from "./instrument";
@@ -58,7 +60,7 @@ export interface ShapePair {
   hard: boolean;
 }
 
-export type TargetKind = "melody-lead" | "battery" | "pyramid";
+export type TargetKind = "melody-lead" | "battery" | "pyramid" | "heard";
 
 export interface Residual {
   kind: TargetKind;
@@ -95,8 +97,13 @@ export interface PlanModel {
   stepEnergy: Float64Array[][];
   /** Per group, its A-weighted energy level as written (dB): where its loudness curve is read from. */
   writtenDb: Float64Array;
-  /** Per group, its loudness level (phon) against its change of energy from as written. */
-  loudness: LoudnessCurve[];
+  /**
+   * Per group, its level against its change of energy from as written: a loudness level (phon) for the
+   * groups the balance compares, the change itself (dB) for a voice's margin over what masks it.
+   */
+  loudness: LevelCurve[];
+  /** Per group: true where its level is a loudness level (phon), false where it is a change of energy (dB). */
+  isLoudness: boolean[];
   residuals: Residual[];
   shape: ShapePair[];
 }
@@ -211,6 +218,10 @@ export function buildPlanModel(
   const playerEnergy: Float64Array[] = [];
   const playerBands: number[][] = [];
   const groups: number[][] = [];
+  /** Groups whose level is their change of energy (dB), not a loudness level. */
+  const energyGroups = new Set<number>();
+  /** A group's energy that no section plays: the listening point's background (A-weighted, as the players'). */
+  const backgroundOf = new Map<number, number>();
   const residuals: Residual[] = [];
   const unitsOfGroup: number[][] = [];
   const groupUnits = (g: number) => (unitsOfGroup[g] ??= [...new Set(groups[g]!.map((p) => playerUnit[p]!).filter((u) => u >= 0))]);
@@ -231,9 +242,48 @@ export function buildPlanModel(
       return groups.length - 1;
     };
     const set = setLabels?.[n] ?? (inputs.length > 1 ? `${n + 1} of ${inputs.length}` : "");
+    const byVoice = groupBy(players, (p) => p.voice);
+
+    // Every voice heard over what masks it, as the heard-at-box check: its margin over the masked
+    // threshold moves up with its own energy and down with the energy of what masks it (the rest of the
+    // band and the background, which stays), each dB for dB (the masker taken as one).
+    const loudness = points[n]!.loudness;
+    if (loudness && wants("heard-at-box")) {
+      const crowd = loudness.backgroundSone > 0 ? " and the crowd" : "";
+      const background = 10 ** (thirdOctavesDbA(backgroundThirdOctaves(inputs[n]!.listeningPoints[0]!.background)) / 10);
+      for (const v of VOICES) {
+        const margin = loudness.voices[v]?.marginDb;
+        const list = byVoice.get(v);
+        if (margin === undefined || !Number.isFinite(margin) || !list?.length) continue;
+        const g = group(list);
+        energyGroups.add(g);
+        const terms = [{ group: g, coef: -1 }];
+        // Alone in silence, a voice is measured against the threshold of hearing: nothing else moves it.
+        const others = players.filter((p) => p.voice !== v);
+        const rest = others.length || background > 0 ? group(others) : -1;
+        if (rest >= 0) {
+          energyGroups.add(rest);
+          if (background > 0) backgroundOf.set(rest, background);
+          terms.push({ group: rest, coef: 1 });
+        }
+        residuals.push({
+          kind: "heard",
+          terms,
+          c: t.heardMarginDb - margin,
+          key: `heard:${v}`,
+          set,
+          // raw = margin asked − (margin as written + change)
+          state: (raw) => {
+            const m = t.heardMarginDb - raw;
+            return m < 0 ? `the ${v} is ${dbWords(-m)} under what masks it (the rest of the band${crowd})` : `the ${v} is only ${dbWords(m)} over what masks it (the rest of the band${crowd})`;
+          },
+          aim: `every voice should be heard over the rest of the band${crowd}`,
+          units: [...groupUnits(g), ...(rest >= 0 ? groupUnits(rest) : [])],
+        });
+      }
+    }
 
     // Melody lead over every other voice.
-    const byVoice = groupBy(players, (p) => p.voice);
     const melody = byVoice.get("melody");
     if (melody && wants("melody-forward")) {
       const gm = group(melody);
@@ -318,9 +368,10 @@ export function buildPlanModel(
     shape: limits.keepShape ? shapePairs(units) : [],
   };
   const tables = stepTables(model);
-  const writtenDb = Float64Array.from(groups, (members) => 10 * Math.log10(members.reduce((e, p) => e + playerEnergy[p]![playerBase[p]!]!, 0)));
-  const loudness = groups.map((members, g) => new LoudnessCurve(members.map((p) => playerBands[p]!), energyRangeDb(tables, g, writtenDb[g]!)));
-  return { ...model, ...tables, writtenDb, loudness };
+  for (const [g, e] of backgroundOf) tables.heldEnergy[g]! += e;
+  const writtenDb = Float64Array.from(groups, (members, g) => 10 * Math.log10(members.reduce((e, p) => e + playerEnergy[p]![playerBase[p]!]!, backgroundOf.get(g) ?? 0)));
+  const loudness = groups.map((members, g): LevelCurve => (energyGroups.has(g) ? ENERGY_CHANGE : new LoudnessCurve(members.map((p) => playerBands[p]!), energyRangeDb(tables, g, writtenDb[g]!))));
+  return { ...model, ...tables, writtenDb, loudness, isLoudness: groups.map((_, g) => !energyGroups.has(g)) };
 }
 
 /** The loudness curves' grid step (dB); between grid points the curve is read linearly (2 dB: as close to a full evaluation as 1 dB in plan-loudness.test.ts, at about two thirds of the time for a 300-player phrase). */
@@ -338,6 +389,14 @@ function energyRangeDb(t: Pick<PlanModel, "heldEnergy" | "stepEnergy">, g: numbe
   return [10 * Math.log10(lo) - writtenDb, 10 * Math.log10(hi) - writtenDb];
 }
 
+/** A group's level (phon or dB) at a change of its energy from as written (dB); never falls as it rises. */
+interface LevelCurve {
+  read(db: number): number;
+}
+
+/** The change itself: a voice's margin over its masked threshold moves dB for dB with its own energy. */
+const ENERGY_CHANGE: LevelCurve = { read: (db) => db };
+
 const shifted = new Float64Array(BANDS); // scratch: a curve's spectrum moved to one grid point
 
 /**
@@ -346,7 +405,7 @@ const shifted = new Float64Array(BANDS); // scratch: a curve's spectrum moved to
  * it is read. ISO 532-1 loudness never falls as every band rises (plan-loudness.test.ts), so the curve
  * is non-decreasing, which the search's bound relies on.
  */
-class LoudnessCurve {
+class LoudnessCurve implements LevelCurve {
   private readonly sumDb = new Float64Array(BANDS);
   private readonly phon: Float64Array;
   private readonly fromDb: number;

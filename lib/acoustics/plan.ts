@@ -1,7 +1,8 @@
-// The balance plan: per section, written dynamic → played dynamic that best meets the targets
-// at one listening point (melody lead, bass-up pyramid, blend of doubled parts), within the musical
-// limits (plan-limits.ts) and as close as it can to what is written. The objective and its exact
+// The balance plan: per section, written dynamic → played dynamic that best meets the targets at one
+// listening point (melody lead, bass-up pyramid, the battery with the winds, every voice heard), within
+// the musical limits (plan-limits.ts) and as close as it can to what is written. The objective and its exact
 // minimum over whole dynamic steps are in plan-search.ts.
+import { loudnessOfPoint } from "./analyze";
 import { checkBalance } from "./checks";
 import { AcousticsInputError } from "./errors";
 import { createSetEvaluator } from "./evaluator";
@@ -86,12 +87,17 @@ export function planProblem(
   const points = full.map((input) => {
     const evaluator = createSetEvaluator(input);
     evaluator.evaluate();
-    return evaluator.result().points[0]!;
+    const point = evaluator.result().points[0]!;
+    // Loudness and masking as written, once: the checks and the plan's "heard" targets read it.
+    point.loudness = loudnessOfPoint(input, point, input.listeningPoints[0]!.background);
+    return point;
   });
-  // The plan serves the targets of the checks that fail as written somewhere in the phrase.
+  // A plan only where some check fails as written somewhere in the phrase.
   const failing = new Set(full.flatMap((input, n) => checkBalance(input, points[n]!, t).filter((c) => !c.passed).map((c) => c.id)));
   const nothingToChange = full.length > 0 && failing.size === 0;
-  const model = buildPlanModel(full, points, t, l, nothingToChange, setLabels, failing);
+  // Every target, not only those of the failing checks: one met as written costs nothing there and keeps
+  // the plan from breaking it while it mends another (a drum feature's brass brought up must not bury it).
+  const model = buildPlanModel(full, points, t, l, nothingToChange, setLabels);
   const change = unitChangeDb(model);
   return {
     model,

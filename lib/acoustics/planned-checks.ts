@@ -2,4 +2,4 @@
 // one player's. Its own module so that pages can read it without loading the engine.
 import type { CheckId } from "./types";
 
-export const PLANNED_CHECKS = ["melody-forward", "battery-balance", "bass-up-pyramid"] as const satisfies readonly CheckId[];
+export const PLANNED_CHECKS = ["melody-forward", "battery-balance", "bass-up-pyramid", "heard-at-box"] as const satisfies readonly CheckId[];

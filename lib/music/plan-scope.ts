@@ -10,7 +10,6 @@ const ELSEWHERE: Partial<Record<CheckId, string>> = {
   "stand-outs": "one player, not a section: ask that player to blend, or set their own dynamic under Solos and players",
   "depth-support": "the back of the form: check which way its players face and whether they are the weaker ones",
   "wide-form-edges": "the ends of the wide form: ask the end players to back off, or bring the ends in",
-  "heard-at-box": "a voice is lost under the band or the crowd, which the plan does not aim at yet; try the voice louder in Listen with the background on, or bring its players nearer",
 };
 
 /** The checks that still fail with the plan in some set and that section dynamics do not aim at, with where to look. */

@@ -52,15 +52,27 @@ describe("the demo show at the press box, as written", () => {
     }
   });
 
-  it("the clarinets' song's plan brings the melody forward in 7, 7A and 8, and says no target is left unmet", () => {
+  it("the clarinets' song's plan brings the melody forward and heard in 7, 7A and 8, and says no target is left unmet", () => {
     const phrase = show.phrases.find((p) => p.name === "Clarinet song")!;
     const inPhrase = sets.filter((s) => s.phrase === phrase.name);
     const plan = solveBalancePlan(inPhrase.map((s) => s.input), "Press box", null, inPhrase.map((s) => s.number), phrase.planLimits);
     expect(plan.unmet).toEqual([]);
     for (const s of inPhrase) {
       const played = applyPlan(s.input, plan.entries);
-      expect([s.number, checkBalance(played, analyzeSet(played).points[0]!).find((c) => c.id === "melody-forward")!.passed]).toEqual([s.number, true]);
+      const after = checkBalance(played, analyzeSet(played).points[0]!);
+      expect([s.number, after.find((c) => c.id === "melody-forward")!.passed, after.find((c) => c.id === "heard-at-box")!.passed]).toEqual([s.number, true, true]);
     }
+  });
+
+  it("the flutes' echo's plan raises the flutes until they are heard over the crowd (set 10)", () => {
+    const phrase = show.phrases.find((p) => p.name === "Flute echo")!;
+    const inPhrase = sets.filter((s) => s.phrase === phrase.name);
+    const plan = solveBalancePlan(inPhrase.map((s) => s.input), "Press box", null, inPhrase.map((s) => s.number), phrase.planLimits);
+    const flutes = plan.entries.find((e) => e.section === "Flutes")!;
+    expect(DYNAMICS.indexOf(flutes.playedDynamic)).toBeGreaterThan(DYNAMICS.indexOf(flutes.writtenDynamic));
+    expect(plan.unmet).toEqual([]);
+    const played = applyPlan(inPhrase[0]!.input, plan.entries);
+    expect(checkBalance(played, analyzeSet(played).points[0]!).find((c) => c.id === "heard-at-box")!.status).toBe("pass");
   });
 
   it("no phrase's plan at the press box breaks its musical limits", () => {
