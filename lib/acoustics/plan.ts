@@ -34,6 +34,8 @@ export interface PlanEntryDetail extends PlanEntry {
 /** What a change serves, in a director's words (the words layer adds the listening point and the section). */
 export type PlanReason =
   | { kind: TargetKind; key: string; /** As written: "the melody is 6 dB under the accompaniment in loudness". */ state: string; aim: string; set: string }
+  /** The change keeps a target met as written while other sections move: "the lower voices should be at least as present as the higher ones". */
+  | { kind: "keep"; aim: string; set: string }
   /** The change keeps the written shape with the sections that move for a target. */
   | { kind: "shape" };
 
@@ -173,7 +175,8 @@ export function unmetAtSteps(m: PlanModel, k: readonly number[]) {
 
 /**
  * Why each changed unit changes: of the targets it takes part in, the one its change helps most (the plan
- * with that unit back at its written dynamic misses it by more), described as written; "shape" when no
+ * with that unit back at its written dynamic misses it by more), described as written, a target missed as
+ * written before one met as written ("keep": the change holds it while others move); "shape" when no
  * target gains, so the change only keeps the written shape with sections that moved.
  */
 function reasonsAtSteps(m: PlanModel, k: readonly number[]): (PlanReason | undefined)[] {
@@ -185,18 +188,27 @@ function reasonsAtSteps(m: PlanModel, k: readonly number[]): (PlanReason | undef
     const back = [...k];
     back[u] = 0;
     const without = rawResiduals(m, levelsAtSteps(m, back));
-    let best = -1;
-    let gain = 1e-9;
-    m.residuals.forEach((res, i) => {
-      const g = sq(without[i]!) - sq(planned[i]!);
-      if (res.units.includes(u) && g > gain) {
-        gain = g;
-        best = i;
-      }
-    });
-    if (best < 0) return { kind: "shape" };
-    const res = m.residuals[best]!;
-    return { kind: res.kind, key: res.key, state: res.state(written[best]!), aim: res.aim, set: res.set };
+    // The target it helps most among those missed as written, else among those met as written.
+    const helpsMost = (missed: boolean) => {
+      let best = -1;
+      let gain = 1e-9;
+      m.residuals.forEach((res, i) => {
+        const g = sq(without[i]!) - sq(planned[i]!);
+        if (written[i]! > 0 === missed && res.units.includes(u) && g > gain) {
+          gain = g;
+          best = i;
+        }
+      });
+      return best;
+    };
+    const fixes = helpsMost(true);
+    if (fixes >= 0) {
+      const res = m.residuals[fixes]!;
+      return { kind: res.kind, key: res.key, state: res.state(written[fixes]!), aim: res.aim, set: res.set };
+    }
+    const keeps = helpsMost(false);
+    if (keeps >= 0) return { kind: "keep", aim: m.residuals[keeps]!.aim, set: m.residuals[keeps]!.set };
+    return { kind: "shape" };
   });
 }
 

@@ -70,6 +70,7 @@ export function adviceFor(e: PlanEntryDetail, ctx: AdviceContext): string {
   const head = `${who}: play ${e.playedDynamic} where ${e.writtenDynamic} is written — `;
   const r = e.reason;
   if (!r || r.kind === "shape") return `${head}this keeps the written shape with the sections that move around it.${limitClause(e, ctx)}`;
+  if (r.kind === "keep") return `${head}with the sections around it moving, this keeps what already works at the ${ctx.pointName}: ${r.aim}.${limitClause(e, ctx)}`;
   const where = `at the ${ctx.pointName}${r.set ? ` in set ${r.set}` : ""}`;
   return `${head}${carryClause(e, ctx)}${r.state} ${where}.${limitClause(e, ctx)}`;
 }

@@ -75,6 +75,19 @@ describe("the demo show at the press box, as written", () => {
     expect(checkBalance(played, analyzeSet(played).points[0]!).find((c) => c.id === "heard-at-box")!.status).toBe("pass");
   });
 
+  it("each change's reason is the problem it mends, not a balance already met (procession, clarinets' song)", () => {
+    const reasonOf = (name: string, section: string) => {
+      const phrase = show.phrases.find((p) => p.name === name)!;
+      const inPhrase = sets.filter((s) => s.phrase === name);
+      const plan = solveBalancePlan(inPhrase.map((s) => s.input), "Press box", null, inPhrase.map((s) => s.number), phrase.planLimits);
+      const r = plan.entries.find((e) => e.section === section)!.reason;
+      return r && "key" in r ? r.key : r?.kind;
+    };
+    expect(reasonOf("Clarinet song", "Trumpets")).toBe("melody-lead:accompaniment");
+    expect(reasonOf("Procession", "Mellophones")).toBe("heard:accompaniment");
+    expect(reasonOf("Procession", "Baritones")).toBe("heard:accompaniment");
+  });
+
   it("no phrase's plan at the press box breaks its musical limits", () => {
     for (const phrase of show.phrases) {
       const inPhrase = sets.filter((s) => s.phrase === phrase.name);

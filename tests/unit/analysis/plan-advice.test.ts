@@ -46,6 +46,14 @@ describe("advisePlan", () => {
     for (const r of rows) if (r.playedDynamic === r.writtenDynamic && !r.atLimit) expect(r.why).toBe("");
   });
 
+  it("says a change that holds a balance already met is kept, in the target's words, not as a problem", () => {
+    const trumpets = plan.entries.find((e) => e.section === "Trumpets")!;
+    const held = { ...trumpets, atLimit: undefined, playedDynamic: "pp" as const, reason: { kind: "keep" as const, aim: "the lower voices should be at least as present as the higher ones", set: "" } };
+    expect(advisePlan([held], ctx)[0]!.why).toBe(
+      "Trumpets: play pp where p is written — with the sections around it moving, this keeps what already works at the Press box: the lower voices should be at least as present as the higher ones.",
+    );
+  });
+
   it("never shows ids or check codes", () => {
     const text = [...rows.map((r) => r.why), ...plan.unmet.map((u) => unmetWords(u, ctx))].join(" ");
     expect(text).not.toMatch(/melody-lead|pyramid:|blend:|melody-forward|bass-up-pyramid|tolerance/);
