@@ -1,10 +1,11 @@
 // "May this member do this to this program": every route handler, page and server action asks here.
 import "server-only";
 import { findMembership } from "@/db/queries/memberships";
-import { findShowAccess } from "@/db/queries/access";
+import { findSessionShowAccess, findShowAccess } from "@/db/queries/access";
 import { forbidden, notFound, unauthorized } from "@/lib/http/errors";
 import { can, type Action, type Role } from "./permissions";
-import { getCurrentSession } from "./session";
+import { hashToken } from "./token";
+import { getCurrentSession, isSettled, sessionToken } from "./session";
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 /** True for an id the database could hold (anything else names nothing). */
@@ -37,19 +38,32 @@ function showRole<T extends { role: Role | null; show: { deletedAt: Date | null 
   return row as T & { role: Role };
 }
 
-export async function requireShow(showId: string, action: Action, { deleted = false }: { deleted?: Deleted } = {}) {
+/**
+ * The signed-in user and the show's access row. A settled session is read with the show in one round
+ * trip (most requests); no cookie, an unknown or expired session or one due to slide goes through Lucia,
+ * which answers 401, clears or renews it, and the show is read after.
+ */
+async function userWithShowAccess(showId: string, setId: string | null) {
+  const token = await sessionToken();
+  if (token && UUID.test(showId)) {
+    const row = await findSessionShowAccess(hashToken(token), showId, setId);
+    if (row && isSettled(row.session.expiresAt)) return { user: row.user, access: row.access };
+  }
   const user = await requireUser();
   if (!UUID.test(showId)) throw notFound("No such show.");
-  const { show, role } = showRole(await findShowAccess(user.id, showId), action, deleted);
+  return { user, access: await findShowAccess(user.id, showId, setId) };
+}
+
+export async function requireShow(showId: string, action: Action, { deleted = false }: { deleted?: Deleted } = {}) {
+  const { user, access } = await userWithShowAccess(showId, null);
+  const { show, role } = showRole(access, action, deleted);
   return { user, role, show };
 }
 
 export async function requireSet(showId: string, setId: string, action: Action) {
-  const user = await requireUser();
-  if (!UUID.test(showId)) throw notFound("No such show.");
   // An id that is not a UUID names no set; the show and role are still checked first, as for any set.
-  const row = await findShowAccess(user.id, showId, UUID.test(setId) ? setId : null);
-  const { show, role, set } = showRole(row, action);
+  const { user, access } = await userWithShowAccess(showId, UUID.test(setId) ? setId : null);
+  const { show, role, set } = showRole(access, action);
   if (!set) throw notFound("No such set.");
   return { user, role, show, set };
 }

@@ -28,9 +28,11 @@ class SessionAdapter extends DrizzlePostgreSQLAdapter {
 }
 
 export const SESSION_COOKIE = "farfield_session";
+/** How long a session lives unused; Lucia renews it once it is past half of that. */
+export const SESSION_LIFETIME = new TimeSpan(30, "d");
 
 export const lucia = new Lucia(new SessionAdapter(db, sessions, users), {
-  sessionExpiresIn: new TimeSpan(30, "d"),
+  sessionExpiresIn: SESSION_LIFETIME,
   sessionCookie: {
     name: SESSION_COOKIE,
     // The cookie lives as long as the session (30 days, renewed as it slides), not Lucia's 400 days.

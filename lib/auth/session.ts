@@ -3,7 +3,7 @@ import "server-only";
 import { cookies } from "next/headers";
 import { cache } from "react";
 import type { Session, User } from "lucia";
-import { lucia, SESSION_COOKIE } from "./lucia";
+import { lucia, SESSION_COOKIE, SESSION_LIFETIME } from "./lucia";
 import { hashToken, newToken } from "./token";
 
 export type CurrentSession = { user: User; session: Session } | { user: null; session: null };
@@ -17,8 +17,22 @@ async function setCookie(token: string) {
   }
 }
 
+/** The session cookie's token, if any. */
+export async function sessionToken(): Promise<string | null> {
+  return (await cookies()).get(SESSION_COOKIE)?.value ?? null;
+}
+
+/**
+ * Whether a stored session is one Lucia would accept as it stands, with nothing to write: not expired and
+ * not yet in the second half of its life, where Lucia slides it forward. Only such a session may be taken
+ * from a read that joined it to other rows; any other goes through Lucia.
+ */
+export function isSettled(expiresAt: Date, now = Date.now()): boolean {
+  return expiresAt.getTime() - now > SESSION_LIFETIME.milliseconds() / 2;
+}
+
 export const getCurrentSession = cache(async (): Promise<CurrentSession> => {
-  const token = (await cookies()).get(SESSION_COOKIE)?.value ?? null;
+  const token = await sessionToken();
   if (!token) return { user: null, session: null };
   const { user, session } = await lucia.validateSession(hashToken(token));
   if (session?.fresh) await setCookie(token); // sliding expiry

@@ -1,7 +1,8 @@
 // Sign-up, sign-in, sign-out and the session cookie, against the running app and its PostgreSQL.
 import { readFileSync } from "node:fs";
 import { afterAll, describe, expect, it } from "vitest";
-import { APP_URL, Client, DEMO, signedIn, uniqueEmail } from "../support/api";
+import { createHash } from "node:crypto";
+import { APP_URL, Client, DEMO, demoIds, signedIn, uniqueEmail } from "../support/api";
 import { appDatabase } from "../support/database";
 import { signUp } from "../support/sign-up";
 
@@ -92,6 +93,60 @@ describe("session", () => {
     expect(Number(waiting.headers.get("retry-after"))).toBeGreaterThan(0);
     const [{ failures }] = await sql<{ failures: number }[]>`select failures from sign_in_limits where key = ${"account:" + email}`;
     expect(failures).toBe(5);
+  });
+
+  // A show's routes read the session together with the show (lib/auth/access.ts); the session's life must
+  // read the same there as on /api/me, which Lucia validates alone.
+  describe("the session as a show's routes read it", () => {
+    const stored = (c: Client) => createHash("sha256").update(decodeURIComponent(c.cookie!.split("=")[1]!)).digest("hex");
+    const expiry = async (id: string) => (await sql<{ expires_at: Date }[]>`select expires_at from sessions where id = ${id}`)[0]?.expires_at;
+    const DAY = 24 * 3600 * 1000;
+
+    it("slides a session in the second half of its 30 days forward, with a new cookie", async () => {
+      const { showId } = await demoIds();
+      const c = await signedIn(DEMO.staff);
+      const id = stored(c);
+      await sql`update sessions set expires_at = now() + interval '10 days' where id = ${id}`;
+      const res = await c.get(`/api/shows/${showId}`);
+      expect(res.status).toBe(200);
+      expect(res.headers.getSetCookie().some((v) => v.startsWith("farfield_session="))).toBe(true);
+      expect((await expiry(id))!.getTime()).toBeGreaterThan(Date.now() + 29 * DAY);
+    });
+
+    it("leaves a session in the first half of its life as it is, with no cookie sent", async () => {
+      const { showId } = await demoIds();
+      const c = await signedIn(DEMO.staff);
+      const id = stored(c);
+      await sql`update sessions set expires_at = now() + interval '20 days' where id = ${id}`;
+      const before = await expiry(id);
+      const res = await c.get(`/api/shows/${showId}`);
+      expect(res.status).toBe(200);
+      expect(res.headers.getSetCookie().some((v) => v.startsWith("farfield_session="))).toBe(false);
+      expect((await expiry(id))!.getTime()).toBe(before!.getTime());
+    });
+
+    it("refuses an expired session with 401, removes it and clears the cookie", async () => {
+      const { showId, setIds, pressBoxId } = await demoIds();
+      const c = await signedIn(DEMO.staff);
+      const id = stored(c);
+      await sql`update sessions set expires_at = now() - interval '1 minute' where id = ${id}`;
+      const res = await c.get(`/api/shows/${showId}/sets/${setIds[0]}/analysis?listeningPointId=${pressBoxId}`);
+      expect(res.status).toBe(401);
+      expect(res.headers.getSetCookie().some((v) => /^farfield_session=;/.test(v))).toBe(true);
+      expect(await expiry(id)).toBeUndefined();
+    });
+
+    it("refuses a signed-out session on a show's routes, and a show of another program is as unknown as none", async () => {
+      const { showId, otherShowId } = await demoIds();
+      const c = await signedIn(DEMO.staff);
+      expect((await c.get(`/api/shows/${otherShowId}`)).status).toBe(404);
+      const cookie = c.cookie;
+      expect((await c.post("/api/auth/sign-out")).status).toBe(204);
+      const stale = new Client();
+      stale.cookie = cookie;
+      expect((await stale.get(`/api/shows/${showId}`)).status).toBe(401);
+      expect((await stale.get(`/api/shows/not-a-show`)).status).toBe(401);
+    });
   });
 
   it("gives the session cookie a Max-Age no longer than the 30-day session", async () => {
