@@ -45,9 +45,12 @@ function sumUncertaintyDb(players: readonly BoxPlayer[], uOf: (instrument: strin
   let total = 0;
   for (const p of players) {
     const e = 10 ** (p.dbA / 10);
+    // Stryker disable next-line ArithmeticOperator: the shares are squared below, so negated energies give the same
     byInstrument.set(p.instrument, (byInstrument.get(p.instrument) ?? 0) + e);
+    // Stryker disable next-line AssignmentOperator: as above, a negated total gives the same squares
     total += e;
   }
+  // Stryker disable next-line ConditionalExpression: a sounding player's level is finite, so the total is 0 only for no players, where the sum below is 0 too
   if (total === 0) return 0;
   let v = 0;
   for (const [k, e] of byInstrument) v += ((e / total) * uOf(k)) ** 2;

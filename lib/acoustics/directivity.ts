@@ -54,6 +54,7 @@ export function directivityInto(out: Float64Array, d: CompiledDirectivity, angle
   while (i < n - 2 && angleDeg > d.angles[i + 1]) i++;
   const t = (angleDeg - d.angles[i]) / (d.angles[i + 1] - d.angles[i]);
   const v = d.values;
+  // Stryker disable next-line EqualityOperator: a write one past a typed array's end is ignored
   for (let b = 0, k = i; b < out.length; b++, k += n) out[b] = v[k] + (v[k + 1] - v[k]) * t;
 }
 
@@ -64,6 +65,7 @@ export function directivityInto(out: Float64Array, d: CompiledDirectivity, angle
  */
 export function angleFromFacingDeg(fx: number, fy: number, dx: number, dy: number, r: number): number {
   const c = (fx * dx + fy * dy) / r;
+  // Stryker disable next-line EqualityOperator: at exactly ±1 clamping gives the same ±1
   return Math.acos(c > 1 ? 1 : c < -1 ? -1 : c) * RAD_TO_DEG;
 }
 
@@ -71,6 +73,7 @@ export function angleFromFacingDeg(fx: number, fy: number, dx: number, dy: numbe
 export function directivityDb(spec: InstrumentSpec, bandIndex: number, angleDeg: number): number {
   const folded = ((requireFinite(angleDeg, "angleDeg") % 360) + 360) % 360;
   const out = new Float64Array(BAND_COUNT);
+  // Stryker disable next-line EqualityOperator: at exactly 180°, 360 − 180 is 180
   directivityInto(out, compileDirectivity(spec.directivity, "directivity"), folded > 180 ? 360 - folded : folded);
   return out[bandIndex];
 }

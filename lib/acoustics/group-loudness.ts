@@ -27,6 +27,7 @@ export interface LoudnessMember {
 /** The energies 10^(L/10) of octave levels, as groupLoudness sums them. */
 export function bandEnergies(bandsDb: ArrayLike<number>): Float64Array {
   const out = new Float64Array(B);
+  // Stryker disable next-line EqualityOperator: a write one past a typed array's end is ignored
   for (let b = 0; b < B; b++) out[b] = 10 ** (bandsDb[b] / 10);
   return out;
 }
@@ -40,10 +41,13 @@ export function groupLoudness(players: readonly LoudnessMember[], perPlayer = fa
   bands.fill(0);
   for (const p of players) {
     const e = p.bandsE;
+    // Stryker disable next-line EqualityOperator: a write one past a typed array's end is ignored
     if (e) for (let b = 0; b < B; b++) bands[b] += e[b];
+    // Stryker disable next-line EqualityOperator: as above
     else for (let b = 0; b < B; b++) bands[b] += 10 ** (p.bandsDb[b] / 10);
   }
   const n = perPlayer && players.length > 0 ? players.length : 1;
+  // Stryker disable next-line EqualityOperator: as above
   for (let b = 0; b < B; b++) bands[b] = 10 * Math.log10(bands[b] / n);
   return octaveLoudness(bands);
 }
@@ -62,9 +66,11 @@ export function memoGroupLoudness(): GroupLoudnessOf {
   const seen = new Map<string, Loudness>();
   let next = 0;
   return (players, perPlayer = false) => {
+    // Stryker disable next-line StringLiteral: any two different prefixes without a comma keep a group and its average player apart
     let key = perPlayer ? "p" : "g";
     for (const p of players) {
       let id = idOf.get(p);
+      // Stryker disable next-line UpdateOperator: ids counted down are as distinct as ids counted up
       if (id === undefined) idOf.set(p, (id = next++));
       key += `,${id}`;
     }

@@ -30,6 +30,7 @@ export function validateConditions(conditions: Conditions): void {
 
 const VOICE_SET: ReadonlySet<string> = new Set<string>([...VOICES, "tacet"]);
 const DYNAMIC_SET: ReadonlySet<string> = new Set<string>(DYNAMICS);
+// Stryker disable next-line ConditionalExpression: Number.isFinite is false for every non-number (it does not convert), so the typeof test alone changes nothing
 const isFiniteNumber = (v: unknown): v is number => typeof v === "number" && Number.isFinite(v);
 
 /** Throws unless every performer is complete; instrument keys are checked against the catalog. */

@@ -139,4 +139,11 @@ describe("musical limits: the cases a director would recognise", () => {
     expect(() => resolveLimits({ windSteps: 7 })).toThrow(/windSteps/);
     expect(() => resolveLimits({ percussionSteps: 1.5 })).toThrow(/whole number/);
   });
+
+  it("names the limit that is not a whole number of steps, and refuses a keep-shape that is not true or false", () => {
+    expect(() => resolveLimits({ windSteps: 2 }, { percussionSteps: 0.5 })).toThrow(/^limits\.percussionSteps must be a whole number of steps$/);
+    for (const keepShape of ["no", 0, null]) {
+      expect(() => resolveLimits({ keepShape } as unknown as Partial<MusicalLimits>)).toThrow(/^limits\.keepShape must be true or false$/);
+    }
+  });
 });
