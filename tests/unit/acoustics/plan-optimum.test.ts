@@ -32,7 +32,9 @@ function exhaustive(problem: ReturnType<typeof planProblem>) {
 }
 
 describe("balance plan: the exhaustive optimum of its own cost", () => {
-  const CASES = 1000;
+  // npm test: 1,000 cases. Mutation runs (tests/unit/mutation-setup.ts) take fewer, so that every mutant
+  // of the solver meets the exhaustive check without the run taking days.
+  const CASES = Number(process.env.FARFIELD_PLAN_CASES ?? 1000);
   it(`reaches it on at least 99.5 % of ${CASES} seeded cases and never reports a target unmet that the optimum meets`, () => {
     let agree = 0;
     let unmetWrongly = 0;
@@ -54,7 +56,7 @@ describe("balance plan: the exhaustive optimum of its own cost", () => {
     }
     const share = (100 * agree) / CASES;
     console.log(`balance plan vs exhaustive search: ${agree} of ${CASES} cases at the optimum (${share.toFixed(2)} %), ${mixedCases} with a section mixing registers; targets reported unmet that the optimum meets: ${unmetWrongly}${misses.length ? `; misses: ${misses.slice(0, 5).join("; ")}` : ""}`);
-    expect(mixedCases).toBeGreaterThan(100);
+    expect(mixedCases).toBeGreaterThan(CASES / 10);
     expect(share).toBeGreaterThanOrEqual(99.5);
     expect(unmetWrongly).toBe(0);
   }, 120_000);
