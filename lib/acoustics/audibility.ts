@@ -46,6 +46,7 @@ const CRITICAL_BAND_CENTRE_HZ = Float64Array.from({ length: CB }, (_, i) =>
 export type MaskerKind = "tonal" | "noise";
 
 /** Masking index (dB) of a tonal or noise-like masker at a critical-band rate (ISO/IEC 11172-3 Annex D, model 1). */
+// Stryker disable next-line StringLiteral: any default but "tonal" takes the noise-like index
 export function maskingIndexDb(bark: number, kind: MaskerKind = "noise"): number {
   return kind === "tonal" ? -1.525 - 0.275 * bark - 4.5 : -1.525 - 0.175 * bark - 0.5;
 }

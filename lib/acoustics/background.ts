@@ -107,6 +107,7 @@ export function validateBackground(background: unknown, field = "background"): a
     }
     return;
   }
+  // Stryker disable next-line ArrayDeclaration: for no known form an empty array leaves key undefined, refused below as "" is
   const [key, count] = "octaveDb" in b ? ["octaveDb", BAND_COUNT] : "thirdOctaveDb" in b ? ["thirdOctaveDb", THIRD_OCTAVE_COUNT] : ["", 0];
   if (!key) throw new AcousticsInputError(field, "must give exactly one of preset, octaveDb, thirdOctaveDb");
   const levels = b[key];

@@ -23,9 +23,13 @@ export function meanGroundOver(u0: number, u1: number, cuts: Float64Array, g: Fl
     return g[pieces - 1];
   }
   let sum = 0;
+  // Stryker disable next-line EqualityOperator: a pass past the last piece adds nothing (its lo is at least cuts[pieces], where every interval asked for ends)
   for (let i = 0; i < pieces; i++) {
+    // Stryker disable next-line EqualityOperator: at a tie both give the same value
     const lo = cuts[i] > u0 ? cuts[i] : u0;
+    // Stryker disable next-line EqualityOperator: at a tie both give the same value
     const hi = cuts[i + 1] < u1 ? cuts[i + 1] : u1;
+    // Stryker disable next-line EqualityOperator: a piece of no length adds 0
     if (hi > lo) sum += (hi - lo) * g[i];
   }
   return sum / (u1 - u0);
@@ -43,6 +47,7 @@ export function regionGroundInto(out: Float64Array, offset: number, cuts: Float6
   out[offset] = meanGroundOver(0, sourceEnd, cuts, g, pieces);
   out[offset + 1] = receiverStart > sourceEnd ? meanGroundOver(sourceEnd, receiverStart, cuts, g, pieces) : meanGroundOver(0, dp, cuts, g, pieces);
   // A receiver region of no length takes the ground under the receiver.
+  // Stryker disable next-line ConditionalExpression,EqualityOperator: with receiverStart = dp the mean over no length at dp (= cuts[pieces]) is the last piece's ground too
   out[offset + 2] = receiverStart < dp ? meanGroundOver(receiverStart, dp, cuts, g, pieces) : g[pieces - 1];
 }
 
@@ -80,8 +85,11 @@ function clipEdge(p: number, q: number): void {
     return;
   }
   const t = q / p;
+  // Stryker disable next-line EqualityOperator: p is not 0 here
   if (p < 0) {
+    // Stryker disable next-line EqualityOperator: at a tie both keep the same value
     if (t > CLIP[0]) CLIP[0] = t;
+    // Stryker disable next-line EqualityOperator: at a tie both keep the same value
   } else if (t < CLIP[1]) CLIP[1] = t;
 }
 

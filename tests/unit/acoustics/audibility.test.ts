@@ -54,6 +54,32 @@ describe("audibility: threshold in quiet", () => {
   });
 });
 
+describe("criticalBandLevelsInto", () => {
+  it("gathers the three lowest critical bands from their third-octaves as energy sums (25–80, 100–160, 200–250 Hz), then one third-octave each", () => {
+    // Hand calculation: six thirds of 50 dB are 50 + 10·lg 6 = 57.782 dB, three of 60 dB are
+    // 60 + 10·lg 3 = 64.771 dB, two of 40 dB are 40 + 10·lg 2 = 43.010 dB; 315 Hz (third 11) is band 3.
+    const thirds = silentThirds();
+    for (let t = 0; t < 6; t++) thirds[t] = 50;
+    for (let t = 6; t < 9; t++) thirds[t] = 60;
+    for (let t = 9; t < 11; t++) thirds[t] = 40;
+    thirds[11] = 70;
+    thirds[27] = 30;
+    const cb = cbLevels(thirds);
+    expect(cb[0]).toBeCloseTo(57.782, 3);
+    expect(cb[1]).toBeCloseTo(64.771, 3);
+    expect(cb[2]).toBeCloseTo(43.01, 3);
+    expect(cb[3]).toBe(70);
+    expect(cb[19]).toBe(30);
+  });
+
+  it("writes the twenty bands and nothing after them", () => {
+    const out = new Float64Array(21).fill(-1);
+    criticalBandLevelsInto(oneBand(16, 60), out);
+    expect(out[cbOfThird(16)]).toBe(60);
+    expect(out[20]).toBe(-1);
+  });
+});
+
 describe("audibility: masking", () => {
   it("in the masker's own critical band the threshold lies 2–6 dB below the masker, 500 Hz … 4 kHz (noise masking a tone: Zwicker & Fastl, Psychoacoustics, ch. 4 — from memory)", () => {
     for (const third of [13, 16, 19, 22]) {

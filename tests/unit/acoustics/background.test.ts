@@ -82,4 +82,15 @@ describe("background: presets and custom levels", () => {
     expect(() => validateBackground("loud")).toThrow(/background/);
     expect(() => validateBackground(null)).not.toThrow();
   });
+
+  it("says what is wanted: a preset or band levels, the presets by name, one known form, the count of levels", () => {
+    expect(() => validateBackground("loud")).toThrow(/^background must be a preset or band levels$/);
+    expect(() => validateBackground({ preset: "rock-concert" })).toThrow(
+      /^background\.preset must be one of quiet-field, stadium-between-bands, crowd-during-performance$/,
+    );
+    // One key, but not a form the engine knows.
+    expect(() => validateBackground({ levels: new Array(8).fill(40) })).toThrow(/^background must give exactly one of preset, octaveDb, thirdOctaveDb$/);
+    expect(() => validateBackground({ octaveDb: [50, 50] })).toThrow(/^background\.octaveDb must hold 8 levels$/);
+    expect(() => validateBackground({ thirdOctaveDb: [50] }, "points[2].background")).toThrow(/^points\[2\]\.background\.thirdOctaveDb must hold 28 levels$/);
+  });
 });

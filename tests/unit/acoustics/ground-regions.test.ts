@@ -3,6 +3,8 @@
 // tests/environment/propagation/test_iso17534_3.py @ 001d785c0ad1dd769831112dd3205c1f04cf685b.
 import { describe, expect, it } from "vitest";
 import { analyzeSet, regionGroundFactors } from "@/lib/acoustics";
+import { PATH_PIECES, meanGroundOver, pathGroundInto } from "@/lib/acoustics/ground-regions";
+import { HALF_LENGTH_M, WIDTH_M } from "@/lib/validation/positions";
 import { handSource, performer } from "./helpers";
 
 // Tables 7, 8 (T04) and 14 (T06): the projected path of 194.16 m spends 40.88, 102.19 and
@@ -42,6 +44,86 @@ describe("regionGroundFactors: G_s, G_m, G_r as length-weighted means over the r
     expect(() => regionGroundFactors([10], [1.5], 1, 4)).toThrow("factors[0]");
     expect(() => regionGroundFactors([-1], [0.5], 1, 4)).toThrow("lengthsM[0]");
     expect(() => regionGroundFactors([10], [0.5], -1, 4)).toThrow("sourceHeightM");
+  });
+
+  it("refuses a height or a stretch that is not a number, naming it", () => {
+    expect(() => regionGroundFactors([10], [0.5], 1, Number.NaN)).toThrow(/^receiverHeightM must be a finite number$/);
+    expect(() => regionGroundFactors([10, Number.NaN], [0.5, 0.5], 1, 4)).toThrow(/^lengthsM\[1\] must be a finite number$/);
+  });
+
+  it("takes a stretch of no length: a source on the ground at its end stands on the next ground", () => {
+    // Lengths 0 and 50 m: the first ground has no extent, so the source (hs = 0, a source region of
+    // no length) stands at 0 m on the second ground, G 0.8; so does everything after it.
+    expect(regionGroundFactors([0, 50], [0.3, 0.8], 0, 1)).toEqual({ source: 0.8, middle: 0.8, receiver: 0.8 });
+  });
+
+  it("gives a path of no length (a point straight above the source) the last ground, under the receiver", () => {
+    expect(regionGroundFactors([0, 0], [0.3, 0.8], 1, 1)).toEqual({ source: 0.8, middle: 0.8, receiver: 0.8 });
+  });
+
+  it("regions that just meet (dp = 30(hs + hr)) leave no middle region: G_m is the mean over the whole path", () => {
+    // hs = hr = 1 m, dp = 60 m: the source region is 0–30 m (G 0), the receiver region 30–60 m
+    // (G 1); 7.3.1 has no middle region, and G_m is then the path's mean, (30·0 + 30·1)/60 = 0.5.
+    expect(regionGroundFactors([30, 30], [0, 1], 1, 1)).toEqual({ source: 0, middle: 0.5, receiver: 1 });
+  });
+});
+
+describe("meanGroundOver", () => {
+  it("reads only the pieces it is told of, in arrays that may be longer", () => {
+    // Two pieces (0–10 m G 0.1, 10–20 m G 0.2) in arrays holding a third (20–30 m G 0.9) left from
+    // other use: at the path's end, 20 m, the ground is the last of the two, 0.2.
+    const cuts = Float64Array.of(0, 10, 20, 30);
+    const g = Float64Array.of(0.1, 0.2, 0.9);
+    expect(meanGroundOver(20, 20, cuts, g, 2)).toBe(0.2);
+    expect(meanGroundOver(10, 10, cuts, g, 2)).toBe(0.2);
+    expect(meanGroundOver(5, 5, cuts, g, 2)).toBe(0.1);
+  });
+});
+
+describe("pathGroundInto: where the path crosses the field (x within ±HALF_LENGTH_M, y from 0 to WIDTH_M)", () => {
+  // Ground factors told apart: between 0.5, field 1, the point's surroundings 0.
+  const path = (sx: number, sy: number, rx: number, ry: number, surroundingsM: number) => {
+    const cuts = new Float64Array(PATH_PIECES + 1);
+    const g = new Float64Array(PATH_PIECES);
+    pathGroundInto(cuts, g, sx, sy, rx, ry, Math.hypot(rx - sx, ry - sy), 1, 0.5, 0, surroundingsM);
+    return { cuts: Array.from(cuts), g: Array.from(g) };
+  };
+  const expectCuts = (got: number[], want: number[]) => {
+    expect(got).toHaveLength(want.length);
+    want.forEach((w, i) => expect(got[i], `cuts[${i}]`).toBeCloseTo(w, 9));
+  };
+
+  it("a performer 15 m onto the field heard 25 m behind the front sideline: field to the sideline, then between, then the surroundings", () => {
+    // Straight back along y: dp = 40 m, the path leaves the field at y = 0 after 15 m; the point's
+    // last 10 m are its own, so cuts 0, 0, 15, 30, 40.
+    const p = path(0, 15, 0, -25, 10);
+    expect(p.g).toEqual([0.5, 1, 0.5, 0]);
+    expectCuts(p.cuts, [0, 0, 15, 30, 40]);
+  });
+
+  it("a source behind the sideline heard on the field: between ground first, the field from where the path enters", () => {
+    // (0, −10) to (0, 30): dp = 40 m, entering the field at y = 0 after 10 m; surroundings 5 m.
+    expectCuts(path(0, -10, 0, 30, 5).cuts, [0, 10, 35, 35, 40]);
+  });
+
+  it("leaves the field over the back sideline and over an end line where they are", () => {
+    // (0, 40) to (0, 60): out at y = WIDTH_M, WIDTH_M − 40 m along; no surroundings.
+    expectCuts(path(0, 40, 0, 60, 0).cuts, [0, 0, WIDTH_M - 40, 20, 20]);
+    // (−50, 10) to (−70, 10): out at x = −HALF_LENGTH_M, HALF_LENGTH_M − 50 m along.
+    expectCuts(path(-50, 10, -70, 10, 0).cuts, [0, 0, HALF_LENGTH_M - 50, 20, 20]);
+  });
+
+  it("a path parallel to the front sideline: behind it no field, along the sideline itself all field", () => {
+    // 5 m behind the sideline, 40 m long, surroundings 10 m: the field piece has no length and sits
+    // where the surroundings begin (30 m).
+    expectCuts(path(-20, -5, 20, -5, 10).cuts, [0, 30, 30, 30, 40]);
+    // On the sideline (y = 0): the edge belongs to the field, which runs until the surroundings.
+    expectCuts(path(-20, 0, 20, 0, 10).cuts, [0, 0, 30, 30, 40]);
+  });
+
+  it("a path that only touches the field where it starts has no field: between ground up to the surroundings", () => {
+    // From the sideline straight out, 10 m, surroundings 4 m: the field would be [0, 0].
+    expectCuts(path(0, 0, 0, -10, 4).cuts, [0, 6, 6, 6, 10]);
   });
 });
 

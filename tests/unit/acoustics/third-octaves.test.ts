@@ -67,6 +67,14 @@ describe("thirdOctavesFromOctaves: energy", () => {
     expect(thirds[4] - thirds[3]).toBeCloseTo(MAX_SLOPE_DB_PER_OCTAVE / 3, 9);
   });
 
+  it(`a fall steeper than ${MAX_SLOPE_DB_PER_OCTAVE} dB per octave is split as a fall of ${MAX_SLOPE_DB_PER_OCTAVE} dB per octave`, () => {
+    // The 8 kHz octave at 0 dB under 4 kHz at 100 dB: its one-sided slope, −100 dB per octave, is
+    // held at −30, so its thirds (indices 24–26) fall by 10 dB each.
+    const thirds = thirdOctavesFromOctaves([100, 100, 100, 100, 100, 100, 100, 0]);
+    expect(thirds[25] - thirds[24]).toBeCloseTo(-MAX_SLOPE_DB_PER_OCTAVE / 3, 9);
+    expect(thirds[26] - thirds[25]).toBeCloseTo(-MAX_SLOPE_DB_PER_OCTAVE / 3, 9);
+  });
+
   it("all octaves silent: all thirds silent, and the loudness is 0 sone", () => {
     const thirds = thirdOctavesFromOctaves(new Array(8).fill(-Infinity));
     expect(thirds.every((l) => l === -Infinity)).toBe(true);
