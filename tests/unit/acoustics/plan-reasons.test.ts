@@ -11,6 +11,7 @@ import {
   type Dynamic,
   type PerformerInput,
 } from "@/lib/acoustics";
+import { UNMET_TOLERANCE_DB } from "@/lib/acoustics/plan";
 import { AIR, BOX, facingToward, lazy, performer } from "./helpers";
 
 const input = (performers: PerformerInput[]): AnalysisInput => ({ performers, listeningPoints: [BOX], conditions: AIR });
@@ -95,6 +96,21 @@ describe("solveBalancePlan: why each section changes", () => {
     expect(Object.keys(t)).not.toContain("atLimit");
   });
 
+  it("names the masked melody's own target when the band's only other sound cannot go softer", () => {
+    // Three clarinets on the melody at p under an amplified synth at pp (its floor): the synth is no wind,
+    // so no lead target compares them; the melody is masked, and only its own rise can mend that.
+    const band = [
+      ...[-2, 0, 2].map((x, k) => at({ id: `C${k}`, x, y: 30, instrument: "clarinet", section: "clarinets", voice: "melody", dynamic: "p" })),
+      at({ id: "K1", x: 0, y: 0, instrument: "synth", section: "pit", voice: "accompaniment", dynamic: "pp" }),
+    ];
+    const p = solveBalancePlan([input(band)], BOX.id, null, undefined, { windSteps: 6, percussionSteps: 6 });
+    const c = entryOf(p, "clarinets") as (typeof p.entries)[number];
+    expect(entryOf(p, "pit")).toMatchObject({ playedDynamic: "pp" });
+    expect(c.playedDynamic).not.toBe("p");
+    expect(c.reason).toMatchObject({ kind: "heard", key: "heard:melody", aim: HEARD_AIM, set: "" });
+    expect(c.reason && "state" in c.reason ? c.reason.state : "").toMatch(/^the melody is \d+ dB under what masks it \(the rest of the band\)$/);
+  });
+
   it("names the first set of a phrase of two identical sets, in the reason and in what stays unmet", () => {
     // Identical sets give equal gains and equal shortfalls: the first set is the one named (a tie rule).
     const p = solveBalancePlan([input(buried), input(buried)], BOX.id, null, ["A", "B"]);
@@ -138,6 +154,37 @@ describe("solveBalancePlan: what stays unmet over a phrase", () => {
     expect(p.unmet).toHaveLength(1);
     expect(p.unmet[0]!.set).toBe("");
     expect(p.unmet[0]!.detail).toMatch(/^The melody (is \d+ dB under|leads) the accompaniment .*in loudness; the melody should lead every other wind voice by 3 dB\.$/);
+  });
+
+  it("lists a target that stays unmet only on the sections it involves", () => {
+    // Two marimbas on a countermelody added to set A: no wind, so the melody's lead over the wind
+    // voices (the target left short) does not involve them.
+    const band = [...A(), ...[-2, 2].map((x, k) => at({ id: `M${k}`, x, y: 20, instrument: "marimba", section: "marimbas", voice: "countermelody", dynamic: "pp" }))];
+    const p = solveBalancePlan([input(band)], BOX.id);
+    expect(p.unmet.map((u) => u.key)).toEqual(["melody-lead:accompaniment"]);
+    expect(entryOf(p, "clarinets")).toMatchObject({ unreachable: [p.unmet[0]!.detail] });
+    expect(entryOf(p, "trumpets")).toMatchObject({ unreachable: [p.unmet[0]!.detail] });
+    expect(Object.keys(entryOf(p, "marimbas"))).not.toContain("unreachable");
+  });
+
+  it(`reports a target missed by more than ${UNMET_TOLERANCE_DB} dB and not one missed by less`, () => {
+    // Set A cannot move toward the lead (the melody at fff, the accompaniment at pp), so the plan misses
+    // the lead target by target − lead as written. The lead as written is found from the melody-forward
+    // check alone (bisection on its target), and the target set just above it.
+    const i = input(A());
+    const point = analyzeSet(i).points[0]!;
+    let lo = 0;
+    let hi = 3;
+    for (let n = 0; n < 40; n++) {
+      const mid = (lo + hi) / 2;
+      if (checkBalance(i, point, { melodyLeadDb: mid }).find((c) => c.id === "melody-forward")!.passed) lo = mid;
+      else hi = mid;
+    }
+    const short = (by: number) => solveBalancePlan([i], BOX.id, { melodyLeadDb: lo + by }).unmet;
+    expect(short(UNMET_TOLERANCE_DB / 2)).toEqual([]);
+    const over = short(UNMET_TOLERANCE_DB * 1.5);
+    expect(over.map((u) => u.key)).toEqual(["melody-lead:accompaniment"]);
+    expect(over[0]!.shortDb).toBeCloseTo(UNMET_TOLERANCE_DB * 1.5, 6);
   });
 
   it("a phrase of the same set twice names the first set", () => {
