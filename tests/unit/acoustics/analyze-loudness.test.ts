@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { AcousticsInputError, analyzeSet, type AnalysisInput } from "@/lib/acoustics";
+import { noiseLikeVoiceBands, sectionLoudness } from "@/lib/acoustics/analyze";
 import { AIR, BOX, performer } from "./helpers";
 
 const band = (background?: AnalysisInput["listeningPoints"][number]["background"]): AnalysisInput => ({
@@ -35,5 +36,37 @@ describe("analyzeSet: loudness at each listening point", () => {
   it("refuses a bad background, naming the listening point", () => {
     expect(() => analyzeSet(band({ preset: "thunder" } as never))).toThrow(AcousticsInputError);
     expect(() => analyzeSet(band({ preset: "thunder" } as never))).toThrow(/listeningPoints\[0\]\.background/);
+  });
+
+  it("judges each point against its own background: two points at one place, one quiet and one with a crowd", () => {
+    // Same place, so the band's levels are the same at both; only the background differs.
+    const input: AnalysisInput = { ...band(), listeningPoints: [{ ...BOX, id: "quiet" }, { ...BOX, id: "crowd", background: { preset: "stadium-between-bands" } }] };
+    const [quiet, crowd] = analyzeSet(input).points;
+    expect(crowd!.loudness!.backgroundSone).toBeGreaterThan(0);
+    expect(quiet!.loudness!.backgroundSone).toBe(0);
+    expect(crowd!.loudness!.voices.melody.marginDb).toBeLessThan(quiet!.loudness!.voices.melody.marginDb);
+    const sectionsQuiet = sectionLoudness(input, quiet!);
+    const sectionsCrowd = sectionLoudness(input, crowd!);
+    expect(sectionsCrowd.flutes!.marginDb).toBeLessThan(sectionsQuiet.flutes!.marginDb);
+    expect(sectionsCrowd.flutes!.shareSone).toBeLessThan(sectionsQuiet.flutes!.shareSone);
+  });
+
+  it("counts the battery's drums, and only them, as noise-like maskers, by voice and by section", () => {
+    const input: AnalysisInput = {
+      ...band(),
+      performers: [
+        ...band().performers,
+        performer({ id: "S1", instrument: "snare", section: "snares", voice: "percussion", dynamic: "f", y: 12 }),
+        performer({ id: "S2", instrument: "snare", section: "snares", voice: "percussion", dynamic: "f", x: 1, y: 12 }),
+      ],
+    };
+    const point = analyzeSet(input).points[0]!;
+    const byVoice = noiseLikeVoiceBands(input, point);
+    expect(Object.keys(byVoice)).toEqual(["percussion"]);
+    expect(Object.keys(noiseLikeVoiceBands(input, point, "section"))).toEqual(["snares"]);
+    // Two snares' energies summed, band by band, from their own levels at the point.
+    const s1 = point.performers.find((p) => p.id === "S1")!.bandsDb;
+    const s2 = point.performers.find((p) => p.id === "S2")!.bandsDb;
+    byVoice.percussion!.forEach((l, b) => expect(l).toBeCloseTo(10 * Math.log10(10 ** (s1[b]! / 10) + 10 ** (s2[b]! / 10)), 9));
   });
 });

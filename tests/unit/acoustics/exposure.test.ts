@@ -36,7 +36,7 @@ describe("exposure limits", () => {
 
   it("rejects bad input with the field named", () => {
     expect(() => exposureLimitMinutes(Number.NaN, "niosh")).toThrow(/dbA/);
-    expect(() => dailyDose(90, -1, "osha")).toThrow(/minutes/);
+    expect(() => dailyDose(90, -1, "osha")).toThrow(/minutes.*must not be negative/);
     expect(() => exposureLimitMinutes(90, "ansi" as "osha")).toThrow(/standard/);
   });
 });
