@@ -157,3 +157,12 @@ describe("fitCarryOffsets: how far the readings check the fit", () => {
     expect(fit.residualStdDb).toBeCloseTo(1.000033, 5);
   });
 });
+
+describe("fitCarryOffsets: what it refuses, by name and with what is wanted", () => {
+  const ok = lazy(() => reading({ trumpets: "f" }, TRUTH));
+
+  it("refuses a reading that is null or not an object, naming its index, before reading anything in it", () => {
+    expect(() => fitCarryOffsets({ readings: [ok(), null as never] })).toThrow(/^readings\[1\] must be an object$/);
+    expect(() => fitCarryOffsets({ readings: [7 as never] })).toThrow(/^readings\[0\] must be an object$/);
+  });
+});
