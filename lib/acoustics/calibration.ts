@@ -130,6 +130,7 @@ export function fitCarryOffsets(options: FitCarryOptions): CarryFit {
 
   // Prediction and Jacobian: ∂L/∂δk is instrument k's share of the energy at the meter.
   function evaluateAt(delta: number[]) {
+    // Stryker disable next-line ArrayDeclaration: every entry is written, in order, below: an empty array ends the same
     const pred = new Array<number>(R);
     const jac = energy.map((row) => {
       const parts = row.map((e, k) => e * Math.exp(delta[k]! * LN10_10));
