@@ -72,6 +72,7 @@ const PARALLEL_COSINE = 0.995;
 const MAX_ITERATIONS = 200;
 
 function measuredOf(r: BoxReading, i: number): { value: number; weights: number[] } {
+  if (r === null || typeof r !== "object") throw new AcousticsInputError(`readings[${i}]`, "must be an object");
   const hasA = r.measuredDbA !== undefined;
   const hasC = r.measuredDbC !== undefined;
   if (hasA === hasC) throw new AcousticsInputError(`readings[${i}]`, "must give exactly one of measuredDbA, measuredDbC");
@@ -82,7 +83,7 @@ function measuredOf(r: BoxReading, i: number): { value: number; weights: number[
 
 /** Weighted energy at the meter per instrument key, for one reading under a catalog. */
 function energiesByInstrument(r: BoxReading, i: number, catalog: InstrumentCatalog, weights: number[]): Map<string, number> {
-  if (r === null || typeof r !== "object" || r.input === null || typeof r.input !== "object") {
+  if (r.input === null || typeof r.input !== "object") {
     throw new AcousticsInputError(`readings[${i}].input`, "must be an object");
   }
   const point = Array.isArray(r.input.listeningPoints) ? r.input.listeningPoints.find((p) => p?.id === r.listeningPointId) : undefined;
@@ -129,6 +130,7 @@ export function fitCarryOffsets(options: FitCarryOptions): CarryFit {
 
   // Prediction and Jacobian: ∂L/∂δk is instrument k's share of the energy at the meter.
   function evaluateAt(delta: number[]) {
+    // Stryker disable next-line ArrayDeclaration: every entry is written, in order, below: an empty array ends the same
     const pred = new Array<number>(R);
     const jac = energy.map((row) => {
       const parts = row.map((e, k) => e * Math.exp(delta[k]! * LN10_10));
