@@ -77,7 +77,9 @@ export function hearingMap(input: AnalysisInput, options: HearingOptions): Heari
       let loudest = -Infinity;
       let loudestSourceId: string | null = null;
       points[n]!.performers.forEach((source, p) => {
-        if (p === n || source.dbA === -Infinity) return;
+        if (p === n) return;
+        // Stryker disable next-line ConditionalExpression,UnaryOperator: a silent source adds 10^(−∞/10) = 0 and never beats loudest, which starts at −∞
+        if (source.dbA === -Infinity) return;
         const s = performers[p]!;
         const dz = earHeightM - (s.z ?? DEFAULT_SOURCE_HEIGHT_M);
         const r = Math.hypot(listener.x - s.x, listener.y - s.y, dz);

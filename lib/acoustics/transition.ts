@@ -5,6 +5,7 @@ import type { Position } from "./types";
 /** An angle brought into [0, 360). */
 export function normalizeDeg(deg: number): number {
   let d = deg % 360;
+  // Stryker disable next-line EqualityOperator: with <=, 0 becomes 360, which the next line maps back to 0 (−0 comes out +0, an equal number)
   if (d < 0) d += 360;
   return d >= 360 ? 0 : d; // −1e-20 + 360 rounds to 360
 }
@@ -39,6 +40,7 @@ export function positionsBetweenInto(
   const { x: ax, y: ay, facingDeg: af } = from;
   const { x: bx, y: by, facingDeg: bf } = to;
   const { x: ox, y: oy, facingDeg: of } = out;
+  // Stryker disable next-line EqualityOperator: a write one past a typed array's end is ignored
   for (let i = 0; i < ox.length; i++) {
     ox[i] = ax[i] + (bx[i] - ax[i]) * t;
     oy[i] = ay[i] + (by[i] - ay[i]) * t;

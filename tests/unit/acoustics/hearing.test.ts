@@ -95,4 +95,54 @@ describe("hearing map: dose of a rehearsal", () => {
     expect(() => hearingMap(input, { rehearsalMinutes: 60, minDistanceM: 0.1 })).toThrow(/minDistanceM/);
     expect(() => hearingMap(set([{ ...drum(), x: Number.NaN }]), { rehearsalMinutes: 60 })).toThrow(/performers\[0\]\.x/);
   });
+
+  it("refuses missing or bad options with a message that names the field and says what is wanted", () => {
+    const input = set([drum(), listener("T1", 3)]);
+    expect(() => hearingMap(input, undefined as never)).toThrow(/^rehearsalMinutes must be a finite number$/);
+    expect(() => hearingMap(input, { rehearsalMinutes: -5 })).toThrow(/^rehearsalMinutes must not be negative$/);
+    expect(() => hearingMap(input, { rehearsalMinutes: 60, earHeightM: Number.NaN })).toThrow(/^earHeightM must be a finite number$/);
+    expect(() => hearingMap(input, { rehearsalMinutes: 60, earHeightM: -0.1 })).toThrow(/^earHeightM must not be negative$/);
+    expect(() => hearingMap(input, { rehearsalMinutes: 60, minDistanceM: Number.NaN })).toThrow(/^minDistanceM must be a finite number$/);
+    expect(() => hearingMap(input, { rehearsalMinutes: 60, minDistanceM: 0.49 })).toThrow(/^minDistanceM must be at least 0\.5$/);
+  });
+
+  it("accepts the edges: a rehearsal of 0 minutes (no dose), ears at the ground, the engine's least distance of 0.5 m", () => {
+    const input = set([drum(), listener("T1", 3)]);
+    const none = byId(hearingMap(input, { rehearsalMinutes: 0 }), "T1");
+    expect(Number.isFinite(none.dbA)).toBe(true);
+    expect(none.exposure.niosh.dose).toBe(0);
+    expect(none.exposure.osha.dose).toBe(0);
+    expect(hearingMap(input, { rehearsalMinutes: 60, earHeightM: 0 }).earHeightM).toBe(0);
+    expect(hearingMap(input, { rehearsalMinutes: 60, minDistanceM: 0.5 }).minDistanceM).toBe(0.5);
+  });
+
+  it("refuses an input that is null, not an object, or without a performers list, as performers must be an array", () => {
+    expect(() => hearingMap(null as never, { rehearsalMinutes: 60 })).toThrow(/^performers must be an array$/);
+    expect(() => hearingMap({ ...set([]), performers: "BD" } as never, { rehearsalMinutes: 60 })).toThrow(/^performers must be an array$/);
+    // A function is not an object by typeof, even one that carries a performers list.
+    const fn = Object.assign(() => 0, set([drum(), listener("T1", 3)]));
+    expect(() => hearingMap(fn as never, { rehearsalMinutes: 60 })).toThrow(/^performers must be an array$/);
+  });
+
+  it("passes a performer that is null on to the engine's own check, naming its index", () => {
+    expect(() => hearingMap(set([drum(), null as never]), { rehearsalMinutes: 60 })).toThrow(/^performers\[1\] must be an object$/);
+  });
+});
+
+describe("hearing map: nearness and the loudest source", () => {
+  it("counts a neighbour closer than 1 m as 1 m anywhere on the field, not only near x = 0", () => {
+    // As the test above, moved 30 m along the field: ground and air alike, so only the angle and
+    // the ground path differ between 0.2 m (counted as 1 m) and 1 m.
+    const touching = byId(hearingMap(set([drum({ x: 30 }), listener("T1", 30.2)]), { rehearsalMinutes: 60 }), "T1").dbA;
+    const atOneMetre = byId(hearingMap(set([drum({ x: 30 }), listener("T1", 30 + Math.sqrt(1 - 0.01))]), { rehearsalMinutes: 60 }), "T1").dbA;
+    expect(Math.abs(touching - atOneMetre)).toBeLessThan(0.2);
+  });
+
+  it("names the first in the set's order as loudest when two sources tie exactly", () => {
+    // Two identical sources on the same spot reach the ears at the same level, bit for bit.
+    const tone = handSource([-20, -20, -20, -20, 111.03, -20, -20, -20]);
+    const src = (id: string) => performer({ id, instrument: "tone", section: "tones", voice: "melody", x: -2, y: 20, z: 1.6 });
+    const input: AnalysisInput = { ...set([src("S1"), src("S2"), listener("T1", 0)]), instruments: { tone } };
+    expect(byId(hearingMap(input, { rehearsalMinutes: 60 }), "T1").loudestSourceId).toBe("S1");
+  });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { facingBetweenDeg, positionsAtCount } from "@/lib/acoustics";
+import { facingBetweenDeg, positionsAtCount, positionsBetweenInto, transitionFraction } from "@/lib/acoustics";
 
 const from = [
   { performerId: "T1", x: 0, y: 10, facingDeg: 350 },
@@ -65,5 +65,53 @@ describe("transitions between sets", () => {
     expect(() => positionsAtCount(from, to, 9, 8)).toThrow(/count must be between 0 and 8/);
     expect(() => positionsAtCount(from, to, 1, 0)).toThrow(/counts must be above 0/);
     expect(() => positionsAtCount([{ ...from[0], x: Number.NaN }], to, 1, 8)).toThrow(/fromPositions\[0\]\.x must be a finite number/);
+  });
+
+  it("turns a half turn clockwise, whichever way it is given", () => {
+    // Clockwise is increasing facing (the code comment of facingBetweenDeg): half-way from
+    // 0° to 180° is 90° and half-way from 180° to 0° is 270°; a quarter of 270° → 90° is 315°.
+    expect(facingBetweenDeg(0, 180, 0.5)).toBeCloseTo(90, 9);
+    expect(facingBetweenDeg(180, 0, 0.5)).toBeCloseTo(270, 9);
+    expect(facingBetweenDeg(270, 90, 0.25)).toBeCloseTo(315, 9);
+  });
+
+  it("accepts a count of 0 and of all the counts, and refuses a count below 0 or a value that is not a number, naming the field", () => {
+    expect(transitionFraction(0, 8)).toBe(0);
+    expect(transitionFraction(8, 8)).toBe(1);
+    expect(() => transitionFraction(-1, 8)).toThrow(/^count must be between 0 and 8$/);
+    expect(() => transitionFraction(Number.NaN, 8)).toThrow(/^count must be a finite number$/);
+    expect(() => transitionFraction(1, Number.POSITIVE_INFINITY)).toThrow(/^counts must be a finite number$/);
+  });
+
+  it("writes positions between two sets held in typed arrays, in place", () => {
+    // Hand calculation at t = 0.25: x 0 → 8 gives 2, x −10 → 6 gives −6; y 10 → 18 gives 12,
+    // y 5 → 13 gives 7; facing 350 → 10 (the short way, +20°) gives 355, 90 → 270 (a half turn,
+    // clockwise) gives 135.
+    const a = { x: new Float64Array([0, -10]), y: new Float64Array([10, 5]), facingDeg: new Float64Array([350, 90]) };
+    const b = { x: new Float64Array([8, 6]), y: new Float64Array([18, 13]), facingDeg: new Float64Array([10, 270]) };
+    const out = { x: new Float64Array(2), y: new Float64Array(2), facingDeg: new Float64Array(2) };
+    positionsBetweenInto(a, b, 0.25, out);
+    expect(Array.from(out.x)).toEqual([2, -6]);
+    expect(Array.from(out.y)).toEqual([12, 7]);
+    expect(out.facingDeg[0]).toBeCloseTo(355, 9);
+    expect(out.facingDeg[1]).toBeCloseTo(135, 9);
+  });
+
+  it("adds a performer present only in the second set after the others, at that set's spot with facing brought into 0…360", () => {
+    const out = positionsAtCount([from[0]!], [{ performerId: "N1", x: 3, y: 4, facingDeg: -90 }, to[1]!], 4, 8);
+    expect(out).toHaveLength(2);
+    expect(out[0]!.performerId).toBe("T1");
+    expect(out[1]).toEqual({ performerId: "N1", x: 3, y: 4, facingDeg: 270 });
+  });
+
+  it("refuses sets that are not lists, ids that are not strings or used twice, and bad coordinates, naming the set and index", () => {
+    const ok = { performerId: "T9", x: 0, y: 0, facingDeg: 0 };
+    // A string has forEach only through Array.prototype: without the check it fails as a TypeError.
+    expect(() => positionsAtCount("T1" as never, to, 1, 8)).toThrow(/^fromPositions must be an array$/);
+    expect(() => positionsAtCount(from, [null] as never, 1, 8)).toThrow(/^toPositions\[0\]\.performerId must be a string$/);
+    expect(() => positionsAtCount(from, [{ ...ok, performerId: 7 }] as never, 1, 8)).toThrow(/^toPositions\[0\]\.performerId must be a string$/);
+    expect(() => positionsAtCount([from[0]!, { ...from[1]!, performerId: "T1" }], to, 1, 8)).toThrow(/^fromPositions\[1\]\.performerId "T1" is used twice$/);
+    expect(() => positionsAtCount(from, [ok, { ...ok, performerId: "T8", y: Number.NaN }], 1, 8)).toThrow(/^toPositions\[1\]\.y must be a finite number$/);
+    expect(() => positionsAtCount(from, [{ ...ok, facingDeg: Number.POSITIVE_INFINITY }], 1, 8)).toThrow(/^toPositions\[0\]\.facingDeg must be a finite number$/);
   });
 });
