@@ -1,5 +1,5 @@
 // Shared builders for the acoustics tests.
-import type { Conditions, Dynamic, InstrumentSpec, PerformerInput, VoiceOrTacet } from "@/lib/acoustics";
+import type { AnalysisInput, Conditions, Dynamic, InstrumentSpec, PerformerInput, VoiceOrTacet } from "@/lib/acoustics";
 
 /** The demo press box: on the 50, 25 m behind the front sideline, 18 m up. */
 export const BOX = { id: "box", x: 0, y: -25, z: 18 };
@@ -57,3 +57,10 @@ export function lazy<T>(make: () => T): () => T {
   let value: { v: T } | null = null;
   return () => (value ??= { v: make() }).v;
 }
+
+/** A set of these performers heard at BOX in still standard air. */
+export const boxInput = (performers: PerformerInput[]): AnalysisInput => ({ performers, listeningPoints: [BOX], conditions: AIR });
+
+/** A performer standing at (x, y) and facing the box. */
+export const facingBox = (over: Partial<PerformerInput> & { id: string; x: number; y: number }): PerformerInput =>
+  performer({ facingDeg: facingToward(over.x, over.y, BOX.x, BOX.y), ...over });

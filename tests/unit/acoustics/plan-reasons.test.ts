@@ -7,16 +7,12 @@ import {
   checkBalance,
   planCost,
   solveBalancePlan,
-  type AnalysisInput,
   type Dynamic,
   type PerformerInput,
 } from "@/lib/acoustics";
 import { UNMET_TOLERANCE_DB } from "@/lib/acoustics/plan";
-import { AIR, BOX, facingToward, lazy, performer } from "./helpers";
+import { BOX, boxInput as input, facingBox as at, lazy, performer } from "./helpers";
 
-const input = (performers: PerformerInput[]): AnalysisInput => ({ performers, listeningPoints: [BOX], conditions: AIR });
-const at = (over: Partial<PerformerInput> & { id: string; x: number; y: number }) =>
-  performer({ facingDeg: facingToward(over.x, over.y, BOX.x, BOX.y), ...over });
 const entryOf = (plan: { entries: { section: string }[] }, section: string) => plan.entries.find((e) => e.section === section)!;
 /** Whether the melody-forward check passes with the given sections at the given dynamics (the analysis, not the plan). */
 const melodyForwardWith = (band: PerformerInput[], dynamics: Record<string, Dynamic>) => {

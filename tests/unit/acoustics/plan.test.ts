@@ -12,12 +12,9 @@ import {
   type Dynamic,
   type PerformerInput,
 } from "@/lib/acoustics";
-import { AIR, BOX, facingToward, lazy, performer } from "./helpers";
+import { BOX, boxInput as input, facingBox as at, lazy, performer } from "./helpers";
 
-const input = (performers: PerformerInput[]): AnalysisInput => ({ performers, listeningPoints: [BOX], conditions: AIR });
 const box = (i: AnalysisInput) => analyzeSet(i).points[0]!;
-const at = (over: Partial<PerformerInput> & { id: string; x: number; y: number }) =>
-  performer({ facingDeg: facingToward(over.x, over.y, BOX.x, BOX.y), ...over });
 const withDynamic = (players: PerformerInput[], section: string, dynamic: Dynamic) =>
   players.map((p) => (p.section === section ? { ...p, dynamic } : p));
 const entryOf = (plan: ReturnType<typeof planBalance>, section: string) => plan.find((e) => e.section === section)!;
