@@ -129,6 +129,13 @@ describe("default instrument catalog", () => {
     for (let b = 0; b <= 4; b++) expect(Math.min(...cl.bandsDb[b])).toBeGreaterThanOrEqual(-3); // woodwinds within a few dB below 1 kHz
   });
 
+  it("names every instrument as people call it: each name given and no two alike", () => {
+    const names = Object.values(DEFAULT_INSTRUMENTS).map((s) => s.name);
+    for (const name of names) expect(name.trim().length, name).toBeGreaterThan(2);
+    expect(new Set(names).size).toBe(names.length);
+    expect(DEFAULT_INSTRUMENTS.tuba.name).toBe("Tuba / sousaphone");
+  });
+
   it("is frozen so callers cannot change the defaults by accident", () => {
     expect(() => {
       (DEFAULT_INSTRUMENTS.trumpet as { carryDb: number }).carryDb = 5;
