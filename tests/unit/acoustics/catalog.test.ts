@@ -129,6 +129,22 @@ describe("default instrument catalog", () => {
     for (let b = 0; b <= 4; b++) expect(Math.min(...cl.bandsDb[b])).toBeGreaterThanOrEqual(-3); // woodwinds within a few dB below 1 kHz
   });
 
+  it("keeps every band of a spectrum under the whole: no octave is louder than the sum of all of them", () => {
+    // The shape is relative to the overall level (types.ts), and the overall level is the energy sum of
+    // the bands, so each band lies below 0 dB (physics of an energy sum, no source needed).
+    for (const [k, s] of Object.entries(DEFAULT_INSTRUMENTS)) for (const db of s.spectrumDb) expect(db, k).toBeLessThan(0);
+  });
+
+  it("brightens with each step up and darkens with each step down, more the higher the band (common practice, no source)", () => {
+    // High partials grow faster than the fundamental as a player pushes: per step, no band gains less
+    // than the band below it, and nothing changes at 500 Hz, the pivot.
+    for (const [k, s] of Object.entries(DEFAULT_INSTRUMENTS)) {
+      const b = s.brightnessDbPerStep;
+      for (let i = 1; i < b.length; i++) expect(b[i]!, `${k} band ${i}`).toBeGreaterThanOrEqual(b[i - 1]!);
+      expect(b[3], k).toBe(0);
+    }
+  });
+
   it("names every instrument as people call it: each name given and no two alike", () => {
     const names = Object.values(DEFAULT_INSTRUMENTS).map((s) => s.name);
     for (const name of names) expect(name.trim().length, name).toBeGreaterThan(2);
