@@ -23,6 +23,7 @@ export function nearestBandIndex(frequencyHz: number): number {
   let bestGap = Infinity;
   for (let i = 0; i < BAND_COUNT; i++) {
     const gap = Math.abs(Math.log(frequencyHz / OCTAVE_BANDS[i].exactHz));
+    // Stryker disable next-line EqualityOperator: exactly between two centres, either band is as near
     if (gap < bestGap) {
       bestGap = gap;
       best = i;

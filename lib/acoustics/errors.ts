@@ -13,6 +13,7 @@ export class AcousticsInputError extends Error {
 
 /** Throws unless `value` is a finite number. */
 export function requireFinite(value: unknown, field: string): number {
+  // Stryker disable next-line ConditionalExpression: Number.isFinite is false for anything not a number, so the type test only reads clearly
   if (typeof value !== "number" || !Number.isFinite(value)) {
     throw new AcousticsInputError(field, "must be a finite number");
   }
