@@ -1,5 +1,5 @@
 // The low-frequency reduction of ISO 532-1:2017 (Table A.3, RAP and DLL) against an independent public
-// transcription. The standard's test signals 1–4 (loudness.test.ts) leave most of this table unread:
+// copy. The standard's test signals 1–4 (loudness.test.ts) leave most of this table unread:
 // a tone or noise reaches one level range of each low band at most, so a wrong entry elsewhere passed.
 // Source of the values below: ggrecow/SQAT psychoacoustic_metrics/Loudness_ISO532_1/Loudness_ISO532_1.m
 // @ 069dc3217202839d8b7c363e52bcc082ec6d6478 ("WEIGHTING BELLOW 315Hz TABLE A.3", RAP and DLL), which
